@@ -1,0 +1,135 @@
+import express, { type Express, type Request } from 'express';
+import session from 'express-session';
+import MySQLStoreFactory from 'express-mysql-session';
+import helmet from 'helmet';
+import { csrfSync } from 'csrf-sync';
+import { existsSync } from 'node:fs';
+import path from 'node:path';
+import type { DataSource } from 'typeorm';
+import { ROOT, type Config } from './config';
+import { apiNotFound, errorHandler } from './errors/error-handler';
+import { HttpError } from './errors/http-error';
+import type { Mailer } from './mail/mailer';
+import { authenticate } from './middleware/auth';
+import { adminRouter } from './modules/admin/admin.router';
+import { UsersService } from './modules/admin/users.service';
+import { AuthService } from './modules/auth/auth.service';
+import { authRouter } from './modules/auth/auth.router';
+import { clubRouter } from './modules/club/club.router';
+
+export interface AppDeps {
+  config: Config;
+  dataSource: DataSource;
+  mailer: Mailer;
+  /** Serve the built client from dist/ (production, demo and e2e). */
+  serveClient?: boolean;
+  log?: (msg: string, err?: unknown) => void;
+}
+
+export interface AppHandle {
+  app: Express;
+  /** Closes what the app opened itself (the session store's pool). */
+  close(): Promise<void>;
+}
+
+/** Builds the Express app; used by the server entry and by the tests. */
+export function createApp(deps: AppDeps): AppHandle {
+  const { config, dataSource } = deps;
+  const log = deps.log ?? ((msg, err) => console.error(msg, err ?? ''));
+  const app = express();
+  app.disable('x-powered-by');
+  if (config.TRUST_PROXY) app.set('trust proxy', 1);
+
+  app.use(
+    helmet({
+      contentSecurityPolicy: {
+        directives: {
+          defaultSrc: ["'self'"],
+          scriptSrc: ["'self'"],
+          styleSrc: ["'self'", "'unsafe-inline'"],
+          imgSrc: ["'self'", 'data:', 'blob:'],
+          mediaSrc: ["'self'", 'blob:'],
+          fontSrc: ["'self'", 'data:'],
+          connectSrc: ["'self'"],
+          workerSrc: ["'self'", 'blob:'],
+          objectSrc: ["'none'"],
+          frameAncestors: ["'none'"],
+          upgradeInsecureRequests: config.COOKIE_SECURE ? [] : null,
+        },
+      },
+      crossOriginEmbedderPolicy: false,
+      strictTransportSecurity: config.COOKIE_SECURE ? undefined : false,
+    }),
+  );
+
+  const MySQLStore = MySQLStoreFactory(session as never);
+  const store = new MySQLStore({
+    host: config.DB_HOST,
+    port: config.DB_PORT,
+    user: config.DB_USER,
+    password: config.dbPassword,
+    database: config.DB_NAME,
+    createDatabaseTable: true,
+    clearExpired: true,
+    checkExpirationInterval: 15 * 60_000,
+    expiration: 30 * 24 * 3600_000,
+  });
+
+  const api = express.Router();
+  api.use(express.json({ limit: '1mb' }));
+  api.use(
+    session({
+      name: 'grovewalk.sid',
+      secret: config.sessionSecret,
+      store,
+      resave: false,
+      saveUninitialized: false,
+      rolling: false,
+      cookie: { httpOnly: true, sameSite: 'lax', secure: config.COOKIE_SECURE, maxAge: 30 * 24 * 3600_000 },
+    }),
+  );
+  const { csrfSynchronisedProtection, generateToken } = csrfSync({
+    getTokenFromRequest: (req: Request) => req.get('x-csrf-token'),
+  });
+  api.use((req, res, next) => {
+    csrfSynchronisedProtection(req, res, (err?: unknown) => {
+      if (err) return next(new HttpError(403, 'csrf_invalid', 'Your session token is missing or out of date. Reload the page and try again.'));
+      next();
+    });
+  });
+  api.use(authenticate(dataSource));
+
+  const auth = new AuthService({ dataSource, mailer: deps.mailer, publicUrl: config.publicUrl, bcryptCost: config.BCRYPT_COST, log });
+  api.get('/health', (_req, res) => res.json({ ok: true }));
+  api.use(authRouter(auth, { signInLimit: config.SIGN_IN_LIMIT, csrfToken: (req) => generateToken(req) }));
+  api.use(clubRouter(dataSource));
+  api.use('/admin', adminRouter(new UsersService(dataSource), dataSource));
+  api.use(apiNotFound);
+
+  app.use('/api', api);
+
+  const dist = path.join(ROOT, 'dist');
+  if (deps.serveClient && existsSync(path.join(dist, 'index.html'))) {
+    app.use(
+      express.static(dist, {
+        index: false,
+        setHeaders(res, file) {
+          res.setHeader('Cache-Control', file.includes(`${path.sep}assets${path.sep}`) ? 'public, max-age=31536000, immutable' : 'no-cache');
+        },
+      }),
+    );
+    app.get('/*splat', (_req, res) => {
+      res.setHeader('Cache-Control', 'no-cache');
+      res.sendFile(path.join(dist, 'index.html'));
+    });
+  }
+
+  app.use(errorHandler({ exposeStack: config.NODE_ENV === 'development', log: (err) => log('unhandled error', err) }));
+
+  return {
+    app,
+    close: async () => {
+      await store.close();
+    },
+  };
+}

@@ -1,0 +1,34 @@
+import 'reflect-metadata';
+import path from 'node:path';
+import { ensureDatabase, startMariaDb, stopMariaDb, type MariaDbInstance } from '../../server/infra/mariadb';
+import { createDataSource } from '../../server/db/data-source';
+import { E2E_DB, INT_DB, TEST_DATA_DIR, TEST_DB_PORT, testConfig } from './test-env';
+
+// One MariaDB for the whole run, shared by the integration and e2e projects. Each project may load
+// this file as a separate module instance, so the shared state lives on globalThis.
+const g = globalThis as typeof globalThis & { __grovewalkTestDb?: { started: Promise<MariaDbInstance>; users: number } };
+
+async function startOnce(): Promise<MariaDbInstance> {
+  const inst = await startMariaDb(path.join(TEST_DATA_DIR, 'mariadb'), TEST_DB_PORT);
+  for (const name of [INT_DB, E2E_DB]) {
+    const config = testConfig(name);
+    await ensureDatabase(inst, { name, user: config.DB_USER, password: config.dbPassword }, true);
+    const ds = createDataSource(config);
+    await ds.initialize();
+    await ds.runMigrations({ transaction: 'each' });
+    await ds.destroy();
+  }
+  return inst;
+}
+
+/** Vitest global setup: a fresh test database per project kind, migrated; stopped at the end. */
+export default async function setup() {
+  g.__grovewalkTestDb ??= { started: startOnce(), users: 0 };
+  const state = g.__grovewalkTestDb;
+  const inst = await state.started;
+  state.users++;
+  return async () => {
+    state.users--;
+    if (state.users === 0) await stopMariaDb(inst);
+  };
+}

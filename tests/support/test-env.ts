@@ -1,0 +1,31 @@
+import path from 'node:path';
+import { loadConfig, ROOT, type Config } from '../../server/config';
+
+/** Where the tests' own MariaDB lives: apart from the developer's data, on its own port. */
+export const TEST_DATA_DIR = path.join(ROOT, '.data', 'test');
+export const TEST_DB_PORT = 3408;
+export const INT_DB = 'grovewalk_test_int';
+export const E2E_DB = 'grovewalk_test_e2e';
+export const E2E_PORT = 5190;
+export const E2E_SMTP_PORT = 2591;
+export const INT_SMTP_PORT = 2590;
+
+/** The environment the tests' servers run with (integration in-process, e2e as a child). */
+export function testEnv(dbName: string, extra: Record<string, string> = {}): Record<string, string> {
+  return {
+    NODE_ENV: 'test',
+    DATA_DIR: TEST_DATA_DIR,
+    MEDIA_DIR: path.join(TEST_DATA_DIR, `media-${dbName}`),
+    DB_PORT: String(TEST_DB_PORT),
+    DB_NAME: dbName,
+    DB_USER: 'grovewalk_test',
+    BCRYPT_COST: '4',
+    SIGN_IN_LIMIT: '1000',
+    ...extra,
+  };
+}
+
+/** Config for an in-process app against a test database. */
+export function testConfig(dbName: string, extra: Record<string, string> = {}): Config {
+  return loadConfig({ ...testEnv(dbName, extra) } as NodeJS.ProcessEnv);
+}
