@@ -7,7 +7,7 @@ import { MIGRATIONS } from './migrations/index';
 /** Builds the TypeORM data source for MariaDB; `synchronize` stays off: the schema comes from migrations. */
 export function createDataSource(config: Pick<Config, 'DB_HOST' | 'DB_PORT' | 'DB_USER' | 'dbPassword' | 'DB_NAME'>): DataSource {
   return new DataSource({
-    type: 'mysql',
+    type: 'mariadb',
     host: config.DB_HOST,
     port: config.DB_PORT,
     username: config.DB_USER,

@@ -30,6 +30,6 @@ export class AuthToken {
   @Column({ name: 'used_at', type: 'datetime', precision: 3, nullable: true })
   usedAt: Date | null;
 
-  @CreateDateColumn({ name: 'created_at', type: 'datetime', precision: 3 })
+  @CreateDateColumn({ name: 'created_at', type: 'datetime', precision: 3, default: () => 'CURRENT_TIMESTAMP(3)' })
   createdAt: Date;
 }

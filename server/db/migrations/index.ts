@@ -1,4 +1,4 @@
-import { Initial1796171327127 } from './1796171327127-initial';
+import { Initial1796171701674 } from './1796171701674-initial';
 
 /** Migrations in the order they run; generated, reviewed, committed and never edited once landed. */
-export const MIGRATIONS = [Initial1796171327127];
+export const MIGRATIONS = [Initial1796171701674];
