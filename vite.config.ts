@@ -27,11 +27,11 @@ export default defineConfig({
     projects: [
       {
         extends: true,
-        test: { name: 'unit', include: ['tests/unit/**/*.test.ts'], environment: 'node', sequence: { groupOrder: 0 } },
+        test: { name: 'unit', include: ['tests/unit/**/*.test.ts'], exclude: ['tests/unit/client/**'], environment: 'node', sequence: { groupOrder: 0 } },
       },
       {
         extends: true,
-        test: { name: 'client', include: ['tests/unit/**/*.test.tsx'], environment: 'happy-dom', sequence: { groupOrder: 0 } },
+        test: { name: 'client', include: ['tests/unit/client/**/*.test.{ts,tsx}'], environment: 'happy-dom', sequence: { groupOrder: 0 } },
       },
       {
         extends: true,

@@ -15,8 +15,12 @@ export default async function setup(project: TestProject) {
   const build = spawnSync(process.execPath, [path.join(ROOT, 'node_modules/vite/bin/vite.js'), 'build', '--logLevel', 'warn'], { cwd: ROOT, stdio: 'inherit' });
   if (build.status !== 0) throw new Error('vite build failed');
 
-  const env = { ...process.env, ...testEnv(E2E_DB, { PORT: String(E2E_PORT), FAKE_SMTP_PORT: String(E2E_SMTP_PORT), SEED_DEMO: 'true' }) };
-  const child: ChildProcess = spawn(process.execPath, [path.join(ROOT, 'node_modules/tsx/dist/cli.mjs'), '--tsconfig', 'tsconfig.server.json', 'server/index.ts'], {
+  const env = {
+    ...process.env,
+    ...testEnv(E2E_DB, { PORT: String(E2E_PORT), FAKE_SMTP_PORT: String(E2E_SMTP_PORT), SEED_DEMO: 'true', JOB_STALE_MS: '5000' }),
+    TSX_TSCONFIG_PATH: 'tsconfig.server.json',
+  };
+  const child: ChildProcess = spawn(process.execPath, ['--import', 'tsx', 'server/index.ts'], {
     cwd: ROOT,
     env,
     stdio: ['ignore', 'pipe', 'pipe'],

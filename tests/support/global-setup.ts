@@ -1,4 +1,5 @@
 import 'reflect-metadata';
+import mysql from 'mysql2/promise';
 import path from 'node:path';
 import { ensureDatabase, startMariaDb, stopMariaDb, type MariaDbInstance } from '../../server/infra/mariadb';
 import { createDataSource } from '../../server/db/data-source';
@@ -21,6 +22,15 @@ async function startOnce(): Promise<MariaDbInstance> {
   return inst;
 }
 
+async function dropDatabases(inst: MariaDbInstance) {
+  const conn = await mysql.createConnection({ socketPath: inst.socket, user: 'root' });
+  try {
+    for (const name of [INT_DB, E2E_DB]) await conn.query(`DROP DATABASE IF EXISTS \`${name}\``);
+  } finally {
+    await conn.end();
+  }
+}
+
 /** Vitest global setup: a fresh test database per project kind, migrated; stopped at the end. */
 export default async function setup() {
   g.__grovewalkTestDb ??= { started: startOnce(), users: 0 };
@@ -29,6 +39,9 @@ export default async function setup() {
   state.users++;
   return async () => {
     state.users--;
-    if (state.users === 0) await stopMariaDb(inst);
+    if (state.users === 0) {
+      await dropDatabases(inst).catch(() => undefined);
+      await stopMariaDb(inst);
+    }
   };
 }

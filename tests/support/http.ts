@@ -52,7 +52,7 @@ export class Agent {
     }
     // After the token fetch, which may have started the session cookie.
     if (this.cookies.size) headers.cookie = this.cookieHeader();
-    const res = await fetch(this.baseUrl + url, { method, headers, body, redirect: 'manual' });
+    const res = await fetch(this.baseUrl + url, { method, headers, body: body as BodyInit | undefined, redirect: 'manual' });
     this.keepCookies(res);
     return res;
   }
@@ -62,6 +62,20 @@ export class Agent {
     const res = await this.raw(method, url, { body, ...opts });
     const text = await res.text();
     return { status: res.status, body: (text ? JSON.parse(text) : null) as T, headers: res.headers };
+  }
+
+  /** Multipart upload of a file from disk, as the browser's upload form sends it. */
+  async upload<T = any>(url: string, filePath: string, fields: Record<string, string> = {}, fileName?: string): Promise<{ status: number; body: T }> {
+    const { readFile } = await import('node:fs/promises');
+    const form = new FormData();
+    for (const [k, v] of Object.entries(fields)) form.append(k, v);
+    form.append('video', new Blob([await readFile(filePath)]), fileName ?? filePath.split('/').pop()!);
+    const headers: Record<string, string> = { 'x-csrf-token': this.csrf ?? (await this.refreshCsrf()) };
+    if (this.cookies.size) headers.cookie = this.cookieHeader();
+    const res = await fetch(this.baseUrl + url, { method: 'POST', headers, body: form });
+    this.keepCookies(res);
+    const text = await res.text();
+    return { status: res.status, body: (text ? JSON.parse(text) : null) as T };
   }
 
   get = <T = any>(url: string) => this.call<T>('GET', url);

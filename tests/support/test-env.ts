@@ -4,8 +4,11 @@ import { loadConfig, ROOT, type Config } from '../../server/config';
 /** Where the tests' own MariaDB lives: apart from the developer's data, on its own port. */
 export const TEST_DATA_DIR = path.join(ROOT, '.data', 'test');
 export const TEST_DB_PORT = 3408;
-export const INT_DB = 'grovewalk_test_int';
-export const E2E_DB = 'grovewalk_test_e2e';
+/** One id per test run, so two runs on one machine never share (or drop) each other's databases. */
+process.env.GROVEWALK_TEST_RUN ??= String(process.pid);
+const RUN = process.env.GROVEWALK_TEST_RUN;
+export const INT_DB = `grovewalk_test_int_${RUN}`;
+export const E2E_DB = `grovewalk_test_e2e_${RUN}`;
 export const E2E_PORT = 5190;
 export const E2E_SMTP_PORT = 2591;
 export const INT_SMTP_PORT = 2590;
