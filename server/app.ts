@@ -16,6 +16,16 @@ import { UsersService } from './modules/admin/users.service';
 import { AuthService } from './modules/auth/auth.service';
 import { authRouter } from './modules/auth/auth.router';
 import { clubRouter } from './modules/club/club.router';
+import { MediaStorage } from './media/storage';
+import { mediaRouter } from './modules/tours/media.router';
+import { tourRouter } from './modules/tours/tour.router';
+import { TourService } from './modules/tours/tour.service';
+import { captionRouter } from './modules/captions/caption.router';
+import { CaptionService } from './modules/captions/caption.service';
+import { cultivarRouter } from './modules/cultivars/cultivar.router';
+import { CultivarService } from './modules/cultivars/cultivar.service';
+import { stopRouter } from './modules/stops/stop.router';
+import { StopService } from './modules/stops/stop.service';
 
 export interface AppDeps {
   config: Config;
@@ -24,6 +34,8 @@ export interface AppDeps {
   /** Serve the built client from dist/ (production, demo and e2e). */
   serveClient?: boolean;
   log?: (msg: string, err?: unknown) => void;
+  /** Called after a request queued background work, so an in-process worker can start at once. */
+  onJobEnqueued?: () => void;
 }
 
 export interface AppHandle {
@@ -75,10 +87,7 @@ export function createApp(deps: AppDeps): AppHandle {
     expiration: 30 * 24 * 3600_000,
   });
 
-  const api = express.Router();
-  api.use(express.json({ limit: '1mb' }));
-  api.use(
-    session({
+  const sessionMw = session({
       name: 'grovewalk.sid',
       secret: config.sessionSecret,
       store,
@@ -86,8 +95,11 @@ export function createApp(deps: AppDeps): AppHandle {
       saveUninitialized: false,
       rolling: false,
       cookie: { httpOnly: true, sameSite: 'lax', secure: config.COOKIE_SECURE, maxAge: 30 * 24 * 3600_000 },
-    }),
-  );
+  });
+  const api = express.Router();
+  // Large enough for a whole caption track (CUES_MAX cues) in one autosave.
+  api.use(express.json({ limit: '8mb' }));
+  api.use(sessionMw);
   const { csrfSynchronisedProtection, generateToken } = csrfSync({
     getTokenFromRequest: (req: Request) => req.get('x-csrf-token'),
   });
@@ -103,10 +115,19 @@ export function createApp(deps: AppDeps): AppHandle {
   api.get('/health', (_req, res) => res.json({ ok: true }));
   api.use(authRouter(auth, { signInLimit: config.SIGN_IN_LIMIT, csrfToken: (req) => generateToken(req) }));
   api.use(clubRouter(dataSource));
+  const storage = new MediaStorage(config.mediaDir);
+  const tours = new TourService(dataSource, storage, deps.onJobEnqueued);
+  api.use('/tours', tourRouter(tours, storage, config.UPLOAD_LIMIT_BYTES));
+  const captions = new CaptionService(dataSource, tours);
+  const cultivars = new CultivarService(dataSource);
+  api.use(captionRouter(captions, tours));
+  api.use(stopRouter(new StopService(dataSource, tours, cultivars, captions)));
+  api.use(cultivarRouter(cultivars));
   api.use('/admin', adminRouter(new UsersService(dataSource), dataSource));
   api.use(apiNotFound);
 
   app.use('/api', api);
+  app.use('/media', sessionMw, authenticate(dataSource), mediaRouter(tours, storage), apiNotFound);
 
   const dist = path.join(ROOT, 'dist');
   if (deps.serveClient && existsSync(path.join(dist, 'index.html'))) {
@@ -118,7 +139,7 @@ export function createApp(deps: AppDeps): AppHandle {
         },
       }),
     );
-    app.get('/*splat', (_req, res) => {
+    app.get('/{*splat}', (_req, res) => {
       res.setHeader('Cache-Control', 'no-cache');
       res.sendFile(path.join(dist, 'index.html'));
     });

@@ -33,6 +33,8 @@ const envSchema = z.object({
   UPLOAD_LIMIT_BYTES: z.coerce.number().int().min(1024).default(4 * 1024 ** 3),
   WORKER: bool.default(true),
   WORKER_CONCURRENCY: z.coerce.number().int().min(1).max(8).default(1),
+  /** Milliseconds without a heartbeat before another worker takes a running job over. */
+  JOB_STALE_MS: z.coerce.number().int().min(1000).default(30_000),
   SIGN_IN_LIMIT: z.coerce.number().int().min(1).default(10),
   SEED_DEMO: bool.default(true),
   /** bcrypt work factor; tests lower it to keep sign-ups fast. */

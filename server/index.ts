@@ -8,6 +8,13 @@ import { InfraError, portInUse, stopMariaDb } from './infra/mariadb';
 import { prepareDatabase } from './infra/prepare';
 import { startFakeSmtp } from './mail/fake-smtp';
 import { createMailer } from './mail/mailer';
+import { MediaStorage } from './media/storage';
+import { jobHandlers } from './jobs/handlers';
+import { JobRunner } from './jobs/runner';
+import { removeOrphanOutputs } from './jobs/transcode.job';
+import { seedDemoContent } from './db/seed/demo-content';
+import { Cultivar } from './db/entities/cultivar.entity';
+import { Tour } from './db/entities/tour.entity';
 
 /** Starts everything `npm start` serves: MariaDB, migrations, demo seed, mail catcher, API and client. */
 async function main() {
@@ -38,7 +45,23 @@ async function main() {
     const seeded = config.SEED_DEMO ? await seedDemo(db.dataSource, { bcryptCost: config.BCRYPT_COST }) : false;
     const mailer = createMailer(config.smtpUrl, config.MAIL_FROM, { ignoreTLS: config.useFakeSmtp });
     cleanups.push(() => mailer.close());
-    const handle = createApp({ config, dataSource: db.dataSource, mailer, serveClient: true });
+    const storage = new MediaStorage(config.mediaDir);
+    await storage.ensure();
+    // First run only: right after the club was seeded, or on a database from before demo content existed.
+    const noContent = (await db.dataSource.getRepository(Cultivar).count()) === 0 && (await db.dataSource.getRepository(Tour).count()) === 0;
+    if (config.SEED_DEMO && (seeded || noContent)) {
+      const content = await seedDemoContent(db.dataSource, storage);
+      if (content.tours) console.log(`Queued ${content.tours} demo walks (fictional) for transcoding; they publish themselves when ready.`);
+    }
+    let runner: JobRunner | null = null;
+    if (config.WORKER) {
+      await removeOrphanOutputs(db.dataSource, storage);
+      runner = new JobRunner(db.dataSource, jobHandlers(db.dataSource, storage), { concurrency: config.WORKER_CONCURRENCY, staleAfterMs: config.JOB_STALE_MS });
+      runner.start();
+      const r = runner;
+      cleanups.push(() => r.stop());
+    }
+    const handle = createApp({ config, dataSource: db.dataSource, mailer, serveClient: true, onJobEnqueued: () => runner?.poke() });
     cleanups.push(() => handle.close());
     const server = http.createServer(handle.app);
     await new Promise<void>((resolve, reject) => {

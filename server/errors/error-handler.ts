@@ -27,8 +27,11 @@ export const apiNotFound: RequestHandler = (_req, res) => {
 /** The one place where errors become responses. */
 export function errorHandler(opts: { exposeStack: boolean; log?: (err: unknown) => void }): ErrorRequestHandler {
   const log = opts.log ?? ((err) => console.error(err));
-  return (err, _req, res, next) => {
+  return (err, req, res, next) => {
     if (res.headersSent) return next(err);
+    // Refused before the body was read (e.g. an upload by someone not allowed): close the
+    // connection so the client stops sending instead of waiting on a half-read request.
+    if (!req.complete) res.set('Connection', 'close');
     if (err instanceof HttpError) return res.status(err.status).json(body(err.code, err.message, err.fields));
     if (err instanceof ZodError) return res.status(400).json(body('invalid_input', 'Some fields need attention.', zodFields(err)));
     if (err instanceof EntityNotFoundError) return res.status(404).json(body('not_found', 'Not found.'));

@@ -58,7 +58,9 @@ function ensureDebianPackages(withBrowser) {
 }
 
 const bin = (pkg, file) => path.join(ROOT, 'node_modules', pkg, file);
-const TSX = [bin('tsx', 'dist/cli.mjs'), '--tsconfig', 'tsconfig.server.json'];
+// tsx as a loader in the same process (its CLI would add a second process between us and the server).
+const TSX = ['--import', 'tsx'];
+const TSX_ENV = { TSX_TSCONFIG_PATH: 'tsconfig.server.json' };
 
 /** Runs a child in the foreground, forwards termination signals, and exits with its code. */
 function foreground(cmd, args, env = {}) {
@@ -78,7 +80,7 @@ switch (mode) {
     ensureDebianPackages(false);
     console.log('grovewalk: building the client…');
     run(process.execPath, [bin('vite', 'bin/vite.js'), 'build', '--logLevel', 'warn']);
-    foreground(process.execPath, [...TSX, 'server/index.ts', ...rest], { NODE_ENV: process.env.NODE_ENV ?? 'production' });
+    foreground(process.execPath, [...TSX, 'server/index.ts', ...rest], { ...TSX_ENV, NODE_ENV: process.env.NODE_ENV ?? 'production' });
     break;
   case 'test':
     ensureDebianPackages(true);
@@ -91,13 +93,13 @@ switch (mode) {
       '--kill-others-on-fail',
       '--names', 'api,web',
       '--prefix-colors', 'green,blue',
-      `"${process.execPath}" ${TSX.join(' ')} watch --clear-screen=false server/index.ts`,
+      `"${process.execPath}" ${bin('tsx', 'dist/cli.mjs')} watch --tsconfig tsconfig.server.json --clear-screen=false server/index.ts`,
       `"${process.execPath}" ${bin('vite', 'bin/vite.js')}`,
     ], { NODE_ENV: 'development' });
     break;
   case 'worker':
     ensureDebianPackages(false);
-    foreground(process.execPath, [...TSX, 'server/jobs/worker.ts', ...rest]);
+    foreground(process.execPath, [...TSX, 'server/jobs/worker.ts', ...rest], TSX_ENV);
     break;
   default:
     fail(`unknown mode "${mode}" (start, test, dev, worker).`);

@@ -1,4 +1,5 @@
 import type { DataSource, EntityManager } from 'typeorm';
+import type { QueryDeepPartialEntity } from 'typeorm';
 import { Job } from '../db/entities/job.entity';
 
 /** How long a running job may go without a heartbeat before another worker takes it over. */
@@ -72,7 +73,7 @@ export class JobQueue {
 
   /** Records progress and proves the worker is alive; false when the lease was lost to another worker. */
   async heartbeat(job: Job, workerId: string, progress?: number, etaSeconds?: number | null): Promise<boolean> {
-    const patch: Partial<Job> = { heartbeatAt: new Date() };
+    const patch: QueryDeepPartialEntity<Job> = { heartbeatAt: new Date() };
     if (progress !== undefined) patch.progress = Math.max(0, Math.min(100, progress));
     if (etaSeconds !== undefined) patch.etaSeconds = etaSeconds == null ? null : Math.max(0, Math.round(etaSeconds));
     const r = await this.dataSource.getRepository(Job).update({ id: job.id, leaseHolder: workerId, state: 'running' }, patch);

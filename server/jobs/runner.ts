@@ -3,6 +3,7 @@ import { randomBytes } from 'node:crypto';
 import type { DataSource } from 'typeorm';
 import type { Job } from '../db/entities/job.entity';
 import { JobQueue } from './queue';
+export { STALE_AFTER_MS } from './queue';
 
 /** What a job handler gets: progress reporting that doubles as the heartbeat, and a cancel signal. */
 export interface JobContext {
@@ -30,12 +31,16 @@ export interface RunnerOptions {
   pollMs?: number;
   heartbeatMs?: number;
   concurrency?: number;
+  /** Heartbeat age after which a running job counts as abandoned (default STALE_AFTER_MS). */
+  staleAfterMs?: number;
+  /** A fixed worker id (tests); by default host:pid:random. */
+  workerId?: string;
   log?: (msg: string) => void;
 }
 
 /** A worker: polls the queue, runs handlers, heartbeats while they run, retries with backoff. */
 export class JobRunner {
-  readonly workerId = `${hostname()}:${process.pid}:${randomBytes(3).toString('hex')}`;
+  readonly workerId: string;
   private readonly queue: JobQueue;
   private stopped = false;
   private readonly running = new Map<number, { ctrl: AbortController; done: Promise<void>; job: Job }>();
@@ -43,11 +48,12 @@ export class JobRunner {
   private wake: (() => void) | null = null;
 
   constructor(
-    private readonly dataSource: DataSource,
+    dataSource: DataSource,
     private readonly handlers: Record<string, JobHandler>,
     private readonly opts: RunnerOptions = {},
   ) {
-    this.queue = new JobQueue(dataSource);
+    this.queue = new JobQueue(dataSource, opts.staleAfterMs);
+    this.workerId = opts.workerId ?? `${hostname()}:${process.pid}:${randomBytes(3).toString('hex')}`;
   }
 
   start(): void {

@@ -57,7 +57,15 @@ export const tourSchema = z.object({
   sourceCodecs: z.string().nullable(),
   posterUrl: z.string().nullable(),
   thumbStrip: z
-    .object({ url: z.string(), everySec: z.number(), tileWidth: z.number(), tileHeight: z.number(), columns: z.number(), count: z.number() })
+    .object({
+      everySec: z.number(),
+      tileWidth: z.number(),
+      tileHeight: z.number(),
+      columns: z.number(),
+      rows: z.number(),
+      count: z.number(),
+      sheets: z.array(z.object({ url: z.string(), width: z.number(), height: z.number() })),
+    })
     .nullable(),
   renditions: z.array(renditionSchema),
   failureReason: z.string().nullable(),

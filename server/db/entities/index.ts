@@ -1,9 +1,14 @@
 import { AuthToken } from './auth-token.entity';
+import { CaptionTrack } from './caption-track.entity';
 import { Club } from './club.entity';
+import { CueRow } from './cue.entity';
+import { Cultivar } from './cultivar.entity';
+import { CultivarVariant } from './cultivar-variant.entity';
 import { Job } from './job.entity';
 import { OutboxMessage } from './outbox-message.entity';
+import { Stop } from './stop.entity';
 import { Tour } from './tour.entity';
 import { User } from './user.entity';
 
 /** Every entity the data source knows; add new ones here. */
-export const ENTITIES = [User, AuthToken, OutboxMessage, Club, Tour, Job];
+export const ENTITIES = [User, AuthToken, OutboxMessage, Club, Tour, Job, Cultivar, CultivarVariant, CaptionTrack, CueRow, Stop];

@@ -12,14 +12,15 @@ export interface RenditionRecord {
   copied: boolean;
 }
 
-/** Thumbnail sprite for seeking previews: one image, fixed tiles every `everySec` seconds. */
+/** Thumbnail sprite sheets for seeking previews: tile i shows time i × everySec. */
 export interface ThumbStripRecord {
-  file: string;
   everySec: number;
   tileWidth: number;
   tileHeight: number;
   columns: number;
+  rows: number;
   count: number;
+  sheets: { file: string; width: number; height: number }[];
 }
 
 /** A walk-through video with its details; the media fields are filled by the transcode job. */

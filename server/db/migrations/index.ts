@@ -1,4 +1,5 @@
 import { Initial1796171701674 } from './1796171701674-initial';
+import { CaptionsStops1796172673735 } from './1796172673735-captions-stops';
 
 /** Migrations in the order they run; generated, reviewed, committed and never edited once landed. */
-export const MIGRATIONS = [Initial1796171701674];
+export const MIGRATIONS = [Initial1796171701674, CaptionsStops1796172673735];
