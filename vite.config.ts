@@ -24,6 +24,7 @@ export default defineConfig({
   },
   build: { outDir: 'dist', sourcemap: true, chunkSizeWarningLimit: 900 },
   test: {
+    reporters: ['default', './tests/support/summary-reporter.ts'],
     projects: [
       {
         extends: true,

@@ -1,5 +1,5 @@
 import { spawn, execFileSync } from 'node:child_process';
-import { existsSync, mkdirSync, readFileSync, rmSync } from 'node:fs';
+import { existsSync, mkdirSync, readFileSync, rmSync, writeFileSync } from 'node:fs';
 import net from 'node:net';
 import path from 'node:path';
 import mysql from 'mysql2/promise';
@@ -49,8 +49,12 @@ async function ping(socket: string): Promise<boolean> {
   }
 }
 
-/** Initialises (first time) and starts a private mariadbd bound to 127.0.0.1, or reuses a running one. */
-export async function startMariaDb(baseDir: string, port: number): Promise<MariaDbInstance> {
+/**
+ * Initialises (first time) and starts a private mariadbd bound to 127.0.0.1, or reuses a running
+ * one. With `searchPorts`, a taken port is not an error: the next free one of the following 20 is
+ * used (test runs of two checkouts on one machine); `inst.port` says which.
+ */
+export async function startMariaDb(baseDir: string, port: number, opts: { searchPorts?: boolean } = {}): Promise<MariaDbInstance> {
   const dir = path.resolve(baseDir);
   const dataDir = path.join(dir, 'data');
   const inst: MariaDbInstance = {
@@ -63,8 +67,12 @@ export async function startMariaDb(baseDir: string, port: number): Promise<Maria
   };
   mkdirSync(dir, { recursive: true });
 
+  const portFile = path.join(dir, 'port');
   const running = readPid(inst.pidFile);
-  if (running && (await ping(inst.socket))) return inst;
+  if (running && (await ping(inst.socket))) {
+    if (existsSync(portFile)) inst.port = Number(readFileSync(portFile, 'utf8').trim()) || port;
+    return inst;
+  }
 
   if (!existsSync(path.join(dataDir, 'mysql'))) {
     rmSync(dataDir, { recursive: true, force: true });
@@ -79,9 +87,13 @@ export async function startMariaDb(baseDir: string, port: number): Promise<Maria
     }
   }
 
-  if (await portInUse(port)) {
-    throw new InfraError(`Port ${port} for Grovewalk's MariaDB is taken by another program; set DB_PORT to a free port (log: ${inst.logFile}).`);
+  while (await portInUse(inst.port)) {
+    if (!opts.searchPorts || inst.port >= port + 20) {
+      throw new InfraError(`Port ${inst.port} for Grovewalk's MariaDB is taken by another program; set DB_PORT to a free port (log: ${inst.logFile}).`);
+    }
+    inst.port++;
   }
+  writeFileSync(portFile, `${inst.port}\n`);
 
   const child = spawn(
     'mariadbd',
@@ -90,7 +102,7 @@ export async function startMariaDb(baseDir: string, port: number): Promise<Maria
       `--datadir=${dataDir}`,
       `--socket=${inst.socket}`,
       `--pid-file=${inst.pidFile}`,
-      `--port=${port}`,
+      `--port=${inst.port}`,
       '--bind-address=127.0.0.1',
       '--skip-name-resolve',
       '--user=root',
@@ -114,7 +126,7 @@ export async function startMariaDb(baseDir: string, port: number): Promise<Maria
     }
     await sleep(100);
   }
-  throw new InfraError(`MariaDB did not start on 127.0.0.1:${port}; see ${inst.logFile}`);
+  throw new InfraError(`MariaDB did not start on 127.0.0.1:${inst.port}; see ${inst.logFile}`);
 }
 
 /** Stops a server this process started and waits for a clean shutdown. */

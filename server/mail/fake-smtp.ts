@@ -10,7 +10,7 @@ const addressText = (a: AddressObject | AddressObject[] | undefined) =>
  * A loopback SMTP server that keeps every message in the outbox table, so admins (and tests)
  * can read what Grovewalk sent without a real mail account.
  */
-export async function startFakeSmtp(dataSource: DataSource, port: number): Promise<{ close(): Promise<void> }> {
+export async function startFakeSmtp(dataSource: DataSource, port: number): Promise<{ port: number; close(): Promise<void> }> {
   const server = new SMTPServer({
     secure: false,
     authOptional: true,
@@ -40,5 +40,6 @@ export async function startFakeSmtp(dataSource: DataSource, port: number): Promi
       resolve();
     });
   });
-  return { close: () => new Promise<void>((r) => server.close(() => r())) };
+  const address = server.server.address();
+  return { port: typeof address === 'object' && address ? address.port : port, close: () => new Promise<void>((r) => server.close(() => r())) };
 }

@@ -2,7 +2,7 @@ import { spawn, spawnSync, type ChildProcess } from 'node:child_process';
 import path from 'node:path';
 import type { TestProject } from 'vitest/node';
 import { ROOT } from '../../server/config';
-import { E2E_DB, E2E_PORT, E2E_SMTP_PORT, testEnv } from './test-env';
+import { E2E_DB, freePort, testEnv } from './test-env';
 
 declare module 'vitest' {
   export interface ProvidedContext {
@@ -15,6 +15,7 @@ export default async function setup(project: TestProject) {
   const build = spawnSync(process.execPath, [path.join(ROOT, 'node_modules/vite/bin/vite.js'), 'build', '--logLevel', 'warn'], { cwd: ROOT, stdio: 'inherit' });
   if (build.status !== 0) throw new Error('vite build failed');
 
+  const [E2E_PORT, E2E_SMTP_PORT] = [await freePort(), await freePort()];
   const env = {
     ...process.env,
     ...testEnv(E2E_DB, { PORT: String(E2E_PORT), FAKE_SMTP_PORT: String(E2E_SMTP_PORT), SEED_DEMO: 'true', JOB_STALE_MS: '5000' }),

@@ -7,7 +7,7 @@ import type { Config } from '../../server/config';
 import { createDataSource } from '../../server/db/data-source';
 import { startFakeSmtp } from '../../server/mail/fake-smtp';
 import { createMailer, type Mailer } from '../../server/mail/mailer';
-import { INT_DB, INT_SMTP_PORT, testConfig } from './test-env';
+import { INT_DB, testConfig } from './test-env';
 
 /** A small cookie-keeping HTTP client that also carries the CSRF token, like the browser client. */
 export class Agent {
@@ -101,10 +101,12 @@ export interface TestServer {
 
 /** Starts the app in-process on a random loopback port against the integration database. */
 export async function startTestServer(extraEnv: Record<string, string> = {}, opts: { smtp?: boolean } = {}): Promise<TestServer> {
-  const config = testConfig(INT_DB, { FAKE_SMTP_PORT: String(INT_SMTP_PORT), ...extraEnv });
-  const dataSource = createDataSource(config);
+  const base = testConfig(INT_DB, extraEnv);
+  const dataSource = createDataSource(base);
   await dataSource.initialize();
-  const smtp = opts.smtp === false ? null : await startFakeSmtp(dataSource, config.FAKE_SMTP_PORT);
+  // Port 0: the system picks a free port, so parallel runs never collide.
+  const smtp = opts.smtp === false ? null : await startFakeSmtp(dataSource, 0);
+  const config = smtp ? testConfig(INT_DB, { FAKE_SMTP_PORT: String(smtp.port), ...extraEnv }) : base;
   const mailer = createMailer(config.smtpUrl, config.MAIL_FROM, { ignoreTLS: true });
   const handle: AppHandle = createApp({ config, dataSource, mailer, log: () => undefined });
   const server = http.createServer(handle.app);
