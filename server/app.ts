@@ -16,6 +16,8 @@ import { UsersService } from './modules/admin/users.service';
 import { AuthService } from './modules/auth/auth.service';
 import { authRouter } from './modules/auth/auth.router';
 import { clubRouter } from './modules/club/club.router';
+import { learningRouter } from './modules/learning/learning.router';
+import { LearningService } from './modules/learning/learning.service';
 import { MediaStorage } from './media/storage';
 import { mediaRouter } from './modules/tours/media.router';
 import { tourRouter } from './modules/tours/tour.router';
@@ -123,6 +125,7 @@ export function createApp(deps: AppDeps): AppHandle {
   api.use(captionRouter(captions, tours));
   api.use(stopRouter(new StopService(dataSource, tours, cultivars, captions)));
   api.use(cultivarRouter(cultivars));
+  api.use(learningRouter(new LearningService(dataSource, config.sessionSecret)));
   api.use('/admin', adminRouter(new UsersService(dataSource), dataSource));
   api.use(apiNotFound);
 

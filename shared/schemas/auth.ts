@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import { USDA_ZONES } from '../hardiness';
 import { roleSchema } from './common';
 
 /** Shortest password we accept (NIST SP 800-63B §3.1.1.2 asks for at least 8; we ask for 10). */
@@ -52,6 +53,8 @@ export type ChangePasswordInput = z.infer<typeof changePasswordInput>;
 export const updateAccountInput = z.object({
   displayName: displayNameSchema.optional(),
   unitSystem: z.enum(['metric', 'imperial']).optional(),
+  /** USDA zone 1a–13b, or null to forget it. */
+  hardinessZone: z.enum(USDA_ZONES).nullable().optional(),
 });
 export type UpdateAccountInput = z.infer<typeof updateAccountInput>;
 
@@ -63,6 +66,7 @@ export const publicUserSchema = z.object({
   role: roleSchema,
   emailVerified: z.boolean(),
   unitSystem: z.enum(['metric', 'imperial']),
+  hardinessZone: z.enum(USDA_ZONES).nullable(),
   createdAt: z.string(),
 });
 export type PublicUser = z.infer<typeof publicUserSchema>;

@@ -29,6 +29,10 @@ export class User {
   @Column({ name: 'unit_system', type: 'enum', enum: ['metric', 'imperial'], default: 'metric' })
   unitSystem: 'metric' | 'imperial';
 
+  /** The reader's USDA hardiness zone (1a–13b), for "does it fit my garden" hints. */
+  @Column({ name: 'hardiness_zone', type: 'varchar', length: 3, nullable: true })
+  hardinessZone: string | null;
+
   /** Free text: the member's garden, shown on the club page. */
   @Column({ type: 'varchar', length: 120, nullable: true })
   garden: string | null;

@@ -31,10 +31,10 @@ function ffmpeg(args: string[]): Promise<void> {
 }
 
 /**
- * Draws a demo walk with ffmpeg's test sources: a title card, then one labelled segment per
+ * Draws a demo walk with ffmpeg's test sources: a title card, then one numbered segment per
  * stop, with a soft tone. Nothing is downloaded; text goes through files so no escaping is needed.
  */
-async function renderDemoClip(tour: DemoTour, names: Map<string, string>, out: string): Promise<void> {
+async function renderDemoClip(tour: DemoTour, out: string): Promise<void> {
   const dir = await mkdtemp(path.join(os.tmpdir(), 'grovewalk-demo-'));
   try {
     const total = INTRO_SEC + tour.stops.reduce((s, x) => s + x.seconds, 0);
@@ -45,8 +45,8 @@ async function renderDemoClip(tour: DemoTour, names: Map<string, string>, out: s
     let t = INTRO_SEC;
     for (const [i, stop] of tour.stops.entries()) {
       const f = path.join(dir, `stop-${i}.txt`);
-      const label = stop.cultivar ? names.get(stop.cultivar)! : 'Unlabelled tree';
-      await writeFile(f, `Stop ${i + 1}\n${label}`);
+      // Only the number: the name is what learn mode asks for, and the tree card shows it anyway.
+      await writeFile(f, `Stop ${i + 1}`);
       filters.push(`drawtext=textfile=${f}:fontsize=30:fontcolor=white:box=1:boxcolor=0x1f3a2a@0.75:boxborderw=12:x=40:y=h-th-40:enable='between(t,${t},${t + stop.seconds})'`);
       t += stop.seconds;
     }
@@ -105,7 +105,6 @@ export async function seedDemoContent(dataSource: DataSource, storage: MediaStor
   }
 
   if (opts.withVideo === false || (await dataSource.getRepository(Tour).count()) > 0) return result;
-  const names = new Map([...byKey].map(([k, v]) => [k, `'${v.epithet}'`]));
   const queue = new JobQueue(dataSource);
   await storage.ensure();
   for (const demo of DEMO_TOURS) {
@@ -128,7 +127,7 @@ export async function seedDemoContent(dataSource: DataSource, storage: MediaStor
       const dir = storage.uploadsDir(tour.id);
       await mkdir(dir, { recursive: true });
       const file = path.join(dir, 'source-demo.mp4');
-      await renderDemoClip(demo, names, file);
+      await renderDemoClip(demo, file);
       await m.getRepository(Tour).update({ id: tour.id }, { sourceFile: storage.relative(file), sourceName: 'demo-walk.mp4', width: 960, height: 540, sourceCodecs: 'h264 + aac' });
 
       const track = await m.getRepository(CaptionTrack).save(m.getRepository(CaptionTrack).create({ tourId: tour.id, lang: 'en', label: 'English', version: 1 }));

@@ -164,6 +164,7 @@ export class AuthService {
     const patch: Partial<User> = {};
     if (input.displayName !== undefined) patch.displayName = input.displayName;
     if (input.unitSystem !== undefined) patch.unitSystem = input.unitSystem;
+    if (input.hardinessZone !== undefined) patch.hardinessZone = input.hardinessZone;
     if (Object.keys(patch).length) await this.users.update({ id: user.id }, patch);
     return this.users.findOneByOrFail({ id: user.id });
   }

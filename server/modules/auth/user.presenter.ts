@@ -11,6 +11,7 @@ export function presentMe(u: User): PublicUser {
     role: u.role,
     emailVerified: !!u.emailVerifiedAt,
     unitSystem: u.unitSystem,
+    hardinessZone: (u.hardinessZone as PublicUser['hardinessZone']) ?? null,
     createdAt: u.createdAt.toISOString(),
   };
 }
