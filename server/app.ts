@@ -25,6 +25,13 @@ import { TourService } from './modules/tours/tour.service';
 import { captionRouter } from './modules/captions/caption.router';
 import { CaptionService } from './modules/captions/caption.service';
 import { cultivarRouter } from './modules/cultivars/cultivar.router';
+import { cultivarMediaRouter, cultivarPhotoRouter } from './modules/cultivars/cultivar-photo.router';
+import { CultivarPhotoService } from './modules/cultivars/cultivar-photo.service';
+import { glossaryRouter } from './modules/glossary/glossary.router';
+import { GlossaryService } from './modules/glossary/glossary.service';
+import { NameDetection } from './modules/spelling-fixes/name-detection';
+import { spellingFixRouter } from './modules/spelling-fixes/spelling-fix.router';
+import { SpellingFixService } from './modules/spelling-fixes/spelling-fix.service';
 import { CultivarService } from './modules/cultivars/cultivar.service';
 import { stopRouter } from './modules/stops/stop.router';
 import { StopService } from './modules/stops/stop.service';
@@ -125,11 +132,16 @@ export function createApp(deps: AppDeps): AppHandle {
   api.use(captionRouter(captions, tours));
   api.use(stopRouter(new StopService(dataSource, tours, cultivars, captions)));
   api.use(cultivarRouter(cultivars));
+  const cultivarPhotos = new CultivarPhotoService(dataSource, config.mediaDir, cultivars);
+  api.use(cultivarPhotoRouter(cultivarPhotos));
+  api.use(glossaryRouter(new GlossaryService(dataSource, cultivars)));
+  api.use(spellingFixRouter(new SpellingFixService({ dataSource, mailer: deps.mailer, publicUrl: config.publicUrl, log }), new NameDetection(dataSource, cultivars)));
   api.use(learningRouter(new LearningService(dataSource, config.sessionSecret)));
   api.use('/admin', adminRouter(new UsersService(dataSource), dataSource));
   api.use(apiNotFound);
 
   app.use('/api', api);
+  app.use('/media/cultivars', sessionMw, authenticate(dataSource), cultivarMediaRouter(cultivarPhotos), apiNotFound);
   app.use('/media', sessionMw, authenticate(dataSource), mediaRouter(tours, storage), apiNotFound);
 
   const dist = path.join(ROOT, 'dist');

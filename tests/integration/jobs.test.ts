@@ -119,12 +119,13 @@ describe('transcode workers', () => {
     const runner = new JobRunner(server.dataSource, jobHandlers(server.dataSource, storage), { pollMs: 100, heartbeatMs: 300, staleAfterMs: 1500, log: () => undefined });
     runner.start();
     try {
-      const tour = await until('the tour to be ready', async () => {
-        const t = await server.dataSource.getRepository(Tour).findOneByOrFail({ id: tourId });
-        return t.state === 'ready' || t.state === 'failed' ? t : null;
+      // The tour turns ready a moment before the job row is marked done: wait for the job.
+      const job = await until('the job to finish', async () => {
+        const j = await server.dataSource.getRepository(Job).findOneByOrFail({ subjectType: 'tour', subjectId: tourId });
+        return j.state === 'done' || j.state === 'failed' ? j : null;
       }, 120_000);
+      const tour = await server.dataSource.getRepository(Tour).findOneByOrFail({ id: tourId });
       expect(tour.state).toBe('ready');
-      const job = await server.dataSource.getRepository(Job).findOneByOrFail({ subjectType: 'tour', subjectId: tourId });
       expect(job.state).toBe('done');
       expect(job.attempts).toBe(2);
       // One output folder, the current one, and no half-written files in it.
@@ -154,9 +155,9 @@ describe('transcode workers', () => {
     a.start();
     b.start();
     try {
-      await until('all four tours', async () => {
-        const ready = await server.dataSource.getRepository(Tour).findBy(ids.map((id) => ({ id, state: 'ready' as const })));
-        return ready.length === 4;
+      await until('all four jobs', async () => {
+        const done = await server.dataSource.getRepository(Job).findBy(ids.map((id) => ({ subjectType: 'tour', subjectId: id, state: 'done' as const })));
+        return done.length === 4;
       }, 120_000);
     } finally {
       await Promise.all([a.stop(), b.stop()]);

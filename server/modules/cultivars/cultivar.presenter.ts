@@ -1,7 +1,23 @@
+import path from 'node:path';
 import { formatNameParts, type NameParts } from '../../../shared/names/cultivar-name';
-import type { CultivarDetail, CultivarSummary } from '../../../shared/schemas/cultivars';
+import { respell, splitHepburn } from '../../../shared/names/hepburn';
+import type {
+  CultivarDetail,
+  CultivarFull,
+  CultivarIndexRow,
+  CultivarPhotoDto,
+  CultivarSummary,
+  SpokenMoment,
+  TourMoment,
+} from '../../../shared/schemas/cultivars';
 import type { Cultivar } from '../../db/entities/cultivar.entity';
+import type { CultivarPhoto } from '../../db/entities/cultivar-photo.entity';
 import type { CultivarVariant } from '../../db/entities/cultivar-variant.entity';
+import type { Stop } from '../../db/entities/stop.entity';
+import type { Tour } from '../../db/entities/tour.entity';
+import { sanitizeRichText } from '../tours/sanitize';
+import { mediaUrl } from '../tours/tour.presenter';
+import { CARE_CAUTION, careNoteFor } from './care-note';
 
 /** The record's name fields in the shape the shared name rules take (the Group field is `group` there). */
 export function namePartsOf(c: Pick<Cultivar, 'genus' | 'species' | 'infraspecificRank' | 'infraspecificEpithet' | 'groupName' | 'epithet'>): NameParts {
@@ -36,11 +52,109 @@ export function presentCultivarDetail(c: Cultivar, variants: readonly CultivarVa
     infraspecificRank: c.infraspecificRank,
     infraspecificEpithet: c.infraspecificEpithet,
     traits: c.traits,
-    notesHtml: c.notesHtml,
+    // Sanitised when stored; again here so rows written another way (seed, imports) never leak markup.
+    notesHtml: sanitizeRichText(c.notesHtml),
     pronunciation: c.pronunciation,
     meaning: c.meaning,
     variants: variants.map((v) => ({ id: v.id, text: v.text })),
     createdAt: c.createdAt.toISOString(),
     updatedAt: c.updatedAt.toISOString(),
+  };
+}
+
+/** A row of the cultivar index table. */
+export function presentCultivarIndexRow(c: Cultivar): CultivarIndexRow {
+  return { ...presentCultivarSummary(c), traits: c.traits, updatedAt: c.updatedAt.toISOString() };
+}
+
+/** Photo URLs go through the visibility-checking media route; disk paths stay on the server. */
+export function presentCultivarPhoto(p: CultivarPhoto): CultivarPhotoDto {
+  const base = `/media/cultivars/${p.cultivarId}/`;
+  return {
+    id: p.id,
+    url: base + encodeURIComponent(path.posix.basename(p.file)),
+    width: p.width,
+    height: p.height,
+    thumbUrl: base + encodeURIComponent(path.posix.basename(p.thumbFile)),
+    thumbWidth: p.thumbWidth,
+    thumbHeight: p.thumbHeight,
+    altText: p.altText,
+    position: p.position,
+  };
+}
+
+/**
+ * The scrubbing-preview tile of a tour at `ms`, so a record page can show each tour moment
+ * without a picture of its own: sheets are filled left to right, then top to bottom, as
+ * makeThumbnailStrip (media/images.ts) writes them with ffmpeg's tile filter.
+ */
+export function thumbnailTile(tour: Tour, ms: number): TourMoment['thumbnail'] {
+  const strip = tour.thumbStrip;
+  if (!strip || strip.sheets.length === 0 || !(strip.everySec > 0)) return null;
+  const count = strip.count || strip.sheets.length * strip.columns * strip.rows;
+  const i = Math.min(count - 1, Math.max(0, Math.floor(ms / 1000 / strip.everySec + 1e-9)));
+  const perSheet = strip.columns * strip.rows;
+  const sheet = strip.sheets[Math.floor(i / perSheet)];
+  if (!sheet) return null;
+  const pos = i % perSheet;
+  return {
+    url: mediaUrl(tour, sheet.file),
+    x: (pos % strip.columns) * strip.tileWidth,
+    y: Math.floor(pos / strip.columns) * strip.tileHeight,
+    w: strip.tileWidth,
+    h: strip.tileHeight,
+  };
+}
+
+/** A stop of a published tour as the record page lists it. */
+export function presentTourMoment(stop: Stop, tour: Tour): TourMoment {
+  return {
+    tourId: tour.id,
+    tourTitle: tour.title,
+    stopId: stop.id,
+    stopTitle: stop.title,
+    startMs: stop.startMs,
+    endMs: stop.endMs,
+    posterUrl: tour.posterFile ? mediaUrl(tour, tour.posterFile) : null,
+    thumbnail: thumbnailTile(tour, stop.startMs),
+  };
+}
+
+/** The epithet's Hepburn syllables word by word, or null when any word is not Hepburn. */
+export function hepburnSyllables(epithet: string): string[][] | null {
+  const words = epithet.trim().split(/\s+/).map((w) => w.replace(/^[.,!]+|[.,!]+$/g, '')).filter((w) => w.length > 0);
+  const out: string[][] = [];
+  for (const word of words) {
+    const split = splitHepburn(word);
+    if (!split.ok) return null;
+    out.push(split.syllables);
+  }
+  return out.length ? out : null;
+}
+
+/** Everything the record page and the tree card show about one record. */
+export interface CultivarFullParts {
+  cultivar: Cultivar;
+  variants: readonly CultivarVariant[];
+  photos: readonly CultivarPhoto[];
+  mergedInto: Cultivar | null;
+  spokenAt: readonly SpokenMoment[];
+  stops: readonly { stop: Stop; tour: Tour }[];
+}
+
+/** The record in full, as GET /api/cultivars/:idOrSlug returns it. */
+export function presentCultivarFull(parts: CultivarFullParts): CultivarFull {
+  const { cultivar: c } = parts;
+  const detail = presentCultivarDetail(c, parts.variants);
+  return {
+    ...detail,
+    respelling: respell(c.epithet),
+    hepburnSyllables: hepburnSyllables(c.epithet),
+    mergedInto: parts.mergedInto ? { id: parts.mergedInto.id, slug: parts.mergedInto.slug, acceptedName: parts.mergedInto.acceptedName } : null,
+    photos: parts.photos.map(presentCultivarPhoto),
+    spokenAt: [...parts.spokenAt],
+    tourMoments: parts.stops.map(({ stop, tour }) => presentTourMoment(stop, tour)),
+    careNote: careNoteFor(c.notesHtml),
+    careCaution: CARE_CAUTION,
   };
 }

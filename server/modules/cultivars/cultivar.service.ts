@@ -1,14 +1,20 @@
-import { Brackets, QueryFailedError, type DataSource, type EntityManager } from 'typeorm';
+import { Brackets, In, QueryFailedError, type DataSource, type EntityManager } from 'typeorm';
 import { hasRole } from '../../../shared/schemas/common';
 import { formatAcceptedName, validateNameParts } from '../../../shared/names/cultivar-name';
 import type { NameRecord } from '../../../shared/names/matcher';
-import type { CultivarInput, ListCultivarsQuery, UpdateCultivarInput } from '../../../shared/schemas/cultivars';
+import { normalizeName } from '../../../shared/names/normalize';
+import type { CultivarIndexQuery, CultivarInput, UpdateCultivarInput } from '../../../shared/schemas/cultivars';
 import { Cultivar } from '../../db/entities/cultivar.entity';
+import { CultivarPhoto } from '../../db/entities/cultivar-photo.entity';
 import { CultivarVariant } from '../../db/entities/cultivar-variant.entity';
+import { SpellingFix } from '../../db/entities/spelling-fix.entity';
+import { Stop } from '../../db/entities/stop.entity';
+import { Tour } from '../../db/entities/tour.entity';
 import type { User } from '../../db/entities/user.entity';
 import { BadRequest, Conflict, NotFound } from '../../errors/http-error';
 import { sanitizeRichText } from '../tours/sanitize';
-import { namePartsOf } from './cultivar.presenter';
+import { namePartsOf, type CultivarFullParts } from './cultivar.presenter';
+import { SpokenNames } from './spoken-names';
 import { firstFreeSlug, slugify } from './slug';
 
 /** The name fields of a record as stored (trimmed; empty optional parts become null). */
@@ -35,17 +41,23 @@ function isDuplicateKey(err: unknown): boolean {
  * (moderators). Names are checked with the shared ICNCP writing rules before anything is stored.
  */
 export class CultivarService {
-  constructor(private readonly dataSource: DataSource) {}
+  /** Where each approved record is heard in published tours (cached; see SpokenNames). */
+  readonly spoken: SpokenNames;
+
+  constructor(private readonly dataSource: DataSource) {
+    this.spoken = new SpokenNames(dataSource, async () => (await this.approvedNameRecords()).records);
+  }
 
   private repo(m: EntityManager = this.dataSource.manager) {
     return m.getRepository(Cultivar);
   }
 
   /**
-   * A page of records by accepted name. Others' proposals and retired records are listed only to
+   * A page of the cultivar index: search, filters (Group, genus, leaf form, habit, container) and
+   * sorting by name or last change. Others' proposals and retired records are listed only to
    * moderators; authors asking for them see their own.
    */
-  async list(q: ListCultivarsQuery, viewer: User | undefined): Promise<{ items: Cultivar[]; total: number; page: number; pageSize: number }> {
+  async list(q: CultivarIndexQuery, viewer: User | undefined): Promise<{ items: Cultivar[]; total: number; page: number; pageSize: number }> {
     const qb = this.repo().createQueryBuilder('c').where('c.mergedIntoId IS NULL');
     if (q.status !== 'any') qb.andWhere('c.status = :status', { status: q.status });
     if (q.status !== 'approved' && !hasRole(viewer?.role, 'moderator')) {
@@ -62,12 +74,27 @@ export class CultivarService {
         ),
       );
     }
-    qb.orderBy('c.acceptedName', 'ASC').addOrderBy('c.id', 'ASC').skip((q.page - 1) * q.pageSize).take(q.pageSize);
+    if (q.genus) qb.andWhere('c.genus = :genus', { genus: q.genus });
+    if (q.group) {
+      const group = q.group.replace(/^\(|\)$/g, '').trim();
+      // The column's collation ignores case: "dissectum" finds "Dissectum Group".
+      qb.andWhere('(c.groupName = :group OR c.groupName = :groupFull)', { group, groupFull: /\sgroup$/i.test(group) ? group : `${group} Group` });
+    }
+    if (q.leafForm) qb.andWhere("JSON_UNQUOTE(JSON_EXTRACT(c.traits, '$.leafForm')) = :leafForm", { leafForm: q.leafForm });
+    if (q.habit) qb.andWhere("JSON_CONTAINS(c.traits, JSON_QUOTE(:habit), '$.habit') = 1", { habit: q.habit });
+    if (q.container) qb.andWhere("JSON_UNQUOTE(JSON_EXTRACT(c.traits, '$.containerSuitability')) = :container", { container: q.container });
+    if (q.sort === 'updated') {
+      qb.orderBy('c.updatedAt', q.dir === 'asc' ? 'ASC' : 'DESC').addOrderBy('c.id', q.dir === 'asc' ? 'ASC' : 'DESC');
+    } else {
+      qb.orderBy('c.acceptedName', q.dir === 'desc' ? 'DESC' : 'ASC').addOrderBy('c.id', q.dir === 'desc' ? 'DESC' : 'ASC');
+    }
+    qb.skip((q.page - 1) * q.pageSize).take(q.pageSize);
     const [items, total] = await qb.getManyAndCount();
     return { items, total, page: q.page, pageSize: q.pageSize };
   }
 
-  private canSee(c: Cultivar, viewer: User | undefined): boolean {
+  /** Proposals are seen by their proposer and moderators; approved and retired records by everyone. */
+  canSee(c: Cultivar, viewer: User | undefined): boolean {
     return c.status !== 'proposed' || hasRole(viewer?.role, 'moderator') || (viewer !== undefined && c.createdById === viewer.id);
   }
 
@@ -78,6 +105,21 @@ export class CultivarService {
     if (!cultivar || !this.canSee(cultivar, viewer)) throw new NotFound('No such cultivar record.');
     const variants = await this.dataSource.getRepository(CultivarVariant).find({ where: { cultivarId: cultivar.id }, order: { text: 'ASC' } });
     return { cultivar, variants };
+  }
+
+  /**
+   * One record in full for its page and the tree card: variants, photos the viewer may see, where
+   * published tours say the name, their stops that show it, and the record it was merged into.
+   */
+  async full(idOrSlug: string, viewer: User | undefined): Promise<CultivarFullParts> {
+    const { cultivar, variants } = await this.get(idOrSlug, viewer);
+    const [photos, mergedInto, spoken, stops] = await Promise.all([
+      this.photosOf(cultivar, viewer),
+      this.mergedTarget(cultivar),
+      cultivar.status === 'approved' && !cultivar.mergedIntoId ? this.spoken.of(cultivar.id) : Promise.resolve({ moments: [], cues: 0 }),
+      this.tourStops(cultivar.id),
+    ]);
+    return { cultivar, variants, photos, mergedInto, spokenAt: spoken.moments, stops };
   }
 
   /** Checks the name with the shared rules; 400 with one message per field when it breaks them. */
@@ -180,6 +222,9 @@ export class CultivarService {
       if (input.meaning !== undefined) cultivar.meaning = orNull(input.meaning);
       if (input.fictional !== undefined) cultivar.fictional = input.fictional;
       if (input.status !== undefined) cultivar.status = input.status;
+      // Given explicitly: TypeORM's own value is CURRENT_TIMESTAMP, whole seconds on MariaDB, which
+      // would sort edits made within one second in the wrong order.
+      cultivar.updatedAt = new Date();
       await repo.save(cultivar);
       return repo.findOneByOrFail({ id });
     });
@@ -191,8 +236,168 @@ export class CultivarService {
     const cultivar = await repo.findOneBy({ id });
     if (!cultivar) throw new NotFound('No such cultivar record.');
     if (cultivar.mergedIntoId) throw new Conflict('cultivar_merged', 'This record was merged into another one; approve that one instead.');
-    if (cultivar.status !== 'approved') await repo.update({ id }, { status: 'approved' });
+    if (cultivar.status !== 'approved') await repo.update({ id }, { status: 'approved', updatedAt: new Date() });
     return repo.findOneByOrFail({ id });
+  }
+
+  /** Takes a record out of use (stops keep their link); approving it again reinstates it. */
+  async retire(id: number): Promise<Cultivar> {
+    const repo = this.repo();
+    const cultivar = await repo.findOneBy({ id });
+    if (!cultivar) throw new NotFound('No such cultivar record.');
+    if (cultivar.status !== 'retired') await repo.update({ id }, { status: 'retired', updatedAt: new Date() });
+    return repo.findOneByOrFail({ id });
+  }
+
+  /**
+   * Merges a duplicate into the record that stays, in one transaction: its stops link to the
+   * survivor, its variants move there (those the survivor already has are dropped), its epithet
+   * becomes a variant of the survivor, its photos and open spelling fixes follow, and the
+   * duplicate is retired with `mergedIntoId` so old links can redirect.
+   */
+  async merge(id: number, intoId: number): Promise<{ survivor: Cultivar; merged: Cultivar; movedStops: number; movedVariants: number }> {
+    if (id === intoId) throw new BadRequest('merge_self', 'A record cannot be merged into itself.', { intoId: 'Choose another record.' });
+    return this.dataSource.transaction(async (m) => {
+      const repo = this.repo(m);
+      // Both rows locked in id order, so two merges of the same pair take turns instead of deadlocking.
+      const locked = await repo.find({ where: { id: In([id, intoId]) }, order: { id: 'ASC' }, lock: { mode: 'pessimistic_write' } });
+      const merged = locked.find((c) => c.id === id);
+      const survivor = locked.find((c) => c.id === intoId);
+      if (!merged) throw new NotFound('No such cultivar record.');
+      if (!survivor) throw new BadRequest('merge_target_missing', 'The record to merge into does not exist.', { intoId: 'Choose an existing record.' });
+      if (merged.mergedIntoId) throw new Conflict('cultivar_merged', 'This record was already merged into another one.');
+      if (survivor.mergedIntoId || survivor.status === 'retired') {
+        throw new Conflict('merge_target_retired', `${survivor.acceptedName} is retired; merge into a record in use.`, { intoId: 'Choose a record in use.' });
+      }
+      if (survivor.status !== 'approved') {
+        // Stops may only link to approved records, so the survivor must be one.
+        throw new Conflict('merge_target_proposed', `${survivor.acceptedName} is still a proposal; approve it first, then merge.`, { intoId: 'Approve this record first.' });
+      }
+
+      const moved = await m.getRepository(Stop).update({ cultivarId: merged.id }, { cultivarId: survivor.id });
+
+      const vrepo = m.getRepository(CultivarVariant);
+      const survivorVariants = await vrepo.find({ where: { cultivarId: survivor.id }, lock: { mode: 'pessimistic_write' } });
+      const taken = new Set([normalizeName(survivor.epithet), ...survivorVariants.map((v) => v.normalized)]);
+      let movedVariants = 0;
+      for (const v of await vrepo.find({ where: { cultivarId: merged.id }, order: { id: 'ASC' }, lock: { mode: 'pessimistic_write' } })) {
+        const key = normalizeName(v.text);
+        if (taken.has(key)) {
+          await vrepo.delete({ id: v.id });
+        } else {
+          await vrepo.update({ id: v.id }, { cultivarId: survivor.id, normalized: key });
+          taken.add(key);
+          movedVariants++;
+        }
+      }
+      const epithetKey = normalizeName(merged.epithet);
+      if (!taken.has(epithetKey)) {
+        await vrepo.insert({ cultivarId: survivor.id, text: merged.epithet, normalized: epithetKey });
+        movedVariants++;
+      }
+
+      const photos = m.getRepository(CultivarPhoto);
+      const last: { max: number | null } | undefined = await photos.createQueryBuilder('p').select('MAX(p.position)', 'max').where('p.cultivarId = :id', { id: survivor.id }).getRawOne();
+      const start = last?.max == null ? 0 : Number(last.max) + 1;
+      for (const [i, p] of (await photos.find({ where: { cultivarId: merged.id }, order: { position: 'ASC', id: 'ASC' } })).entries()) {
+        await photos.update({ id: p.id }, { cultivarId: survivor.id, position: start + i });
+      }
+
+      // Open fixes follow the record unless the survivor already has the same one open.
+      const fixes = m.getRepository(SpellingFix);
+      for (const fix of await fixes.find({ where: { cultivarId: merged.id, status: 'open' }, lock: { mode: 'pessimistic_write' } })) {
+        const twin = await fixes.findOneBy({ cultivarId: survivor.id, proposedNormalized: fix.proposedNormalized, status: 'open' });
+        if (twin) {
+          await fixes.update({ id: fix.id }, { status: 'declined', openGuard: null, declineReason: `Merged into ${survivor.acceptedName}, which has the same fix open.`, decidedAt: new Date() });
+        } else {
+          await fixes.update({ id: fix.id }, { cultivarId: survivor.id, suggestion: survivor.epithet });
+        }
+      }
+
+      await repo.update({ id: merged.id }, { status: 'retired', mergedIntoId: survivor.id, updatedAt: new Date() });
+      // Touch the survivor so caches keyed on records (spoken names, glossary) see the change.
+      await repo.update({ id: survivor.id }, { updatedAt: new Date() });
+      return {
+        survivor: await repo.findOneByOrFail({ id: survivor.id }),
+        merged: await repo.findOneByOrFail({ id: merged.id }),
+        movedStops: moved.affected ?? 0,
+        movedVariants,
+      };
+    });
+  }
+
+  /**
+   * Records a misspelling or mishearing for a record, so the matcher finds it and search maps it
+   * to the accepted name. Refused when it is the record's own epithet, already recorded, or the
+   * accepted epithet of another record (a variant must not hide a real name).
+   */
+  async addVariant(id: number, text: string): Promise<CultivarVariant> {
+    const clean = text.trim().replace(/\s+/g, ' ');
+    const key = normalizeName(clean);
+    if (!key) throw new BadRequest('variant_empty', 'Enter letters or digits.', { text: 'Enter the misspelling or mishearing.' });
+    return this.dataSource.transaction(async (m) => {
+      const cultivar = await this.repo(m).findOne({ where: { id }, lock: { mode: 'pessimistic_write' } });
+      if (!cultivar) throw new NotFound('No such cultivar record.');
+      if (normalizeName(cultivar.epithet) === key) {
+        throw new BadRequest('variant_is_epithet', `"${clean}" is the accepted epithet itself (letter case, spaces and hyphens aside).`, { text: 'This is the accepted epithet.' });
+      }
+      const vrepo = m.getRepository(CultivarVariant);
+      const existing = await vrepo.findOneBy({ cultivarId: id, normalized: key });
+      if (existing) throw new Conflict('variant_exists', `"${existing.text}" is already recorded for this record.`, { text: 'Already recorded.' });
+      const other = await this.repo(m)
+        .createQueryBuilder('c')
+        .where('c.id <> :id', { id })
+        .andWhere('c.mergedIntoId IS NULL')
+        .andWhere("c.status <> 'retired'")
+        .getMany()
+        .then((all) => all.find((c) => normalizeName(c.epithet) === key));
+      if (other) {
+        throw new Conflict('variant_is_other_name', `"${clean}" is the accepted epithet of ${other.acceptedName}; it cannot also be a misspelling of this record.`, {
+          text: 'Another record has this name.',
+        });
+      }
+      const saved = await vrepo.save(vrepo.create({ cultivarId: id, text: clean, normalized: key }));
+      await this.repo(m).update({ id }, { updatedAt: new Date() });
+      return saved;
+    });
+  }
+
+  /** Forgets a recorded variant. */
+  async removeVariant(id: number, variantId: number): Promise<void> {
+    const result = await this.dataSource.getRepository(CultivarVariant).delete({ id: variantId, cultivarId: id });
+    if (!result.affected) throw new NotFound('No such variant of this record.');
+    await this.repo().update({ id }, { updatedAt: new Date() });
+  }
+
+  /** The record a merged one now lives on, for redirects. */
+  async mergedTarget(c: Cultivar): Promise<Cultivar | null> {
+    return c.mergedIntoId ? this.repo().findOneBy({ id: c.mergedIntoId }) : null;
+  }
+
+  /** Photos in their order; only when the viewer may see them (see `canSeePhotos`). */
+  async photosOf(c: Cultivar, viewer: User | undefined): Promise<CultivarPhoto[]> {
+    if (!this.canSeePhotos(c, viewer)) return [];
+    return this.dataSource.getRepository(CultivarPhoto).find({ where: { cultivarId: c.id }, order: { position: 'ASC', id: 'ASC' } });
+  }
+
+  /** Photos are public once the record is approved; before that (or once retired) only for its proposer and moderators. */
+  canSeePhotos(c: Cultivar, viewer: User | undefined): boolean {
+    return c.status === 'approved' || hasRole(viewer?.role, 'moderator') || (viewer !== undefined && c.createdById === viewer.id);
+  }
+
+  /** Stops of published tours that show this record, newest tour first, with the tour for pictures. */
+  async tourStops(cultivarId: number): Promise<{ stop: Stop; tour: Tour }[]> {
+    const stops = await this.dataSource
+      .getRepository(Stop)
+      .createQueryBuilder('s')
+      .innerJoinAndSelect('s.tour', 't')
+      .where('s.cultivarId = :cultivarId', { cultivarId })
+      .andWhere("t.state = 'published'")
+      .orderBy('t.publishedAt', 'DESC')
+      .addOrderBy('t.id', 'ASC')
+      .addOrderBy('s.startMs', 'ASC')
+      .getMany();
+    return stops.map((stop) => ({ stop, tour: stop.tour! }));
   }
 
   /** An approved record a stop may link to, or null. */
