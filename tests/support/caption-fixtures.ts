@@ -1,6 +1,7 @@
 // Rows and requests the caption, stop and cultivar integration tests share. Everything named here
 // (the garden club, its tours and the cultivar epithets) is invented for the tests.
 import type { DataSource } from 'typeorm';
+import { normalizeName } from '../../shared/names/normalize';
 import { Cultivar } from '../../server/db/entities/cultivar.entity';
 import { CultivarVariant } from '../../server/db/entities/cultivar-variant.entity';
 import { Tour } from '../../server/db/entities/tour.entity';
@@ -42,7 +43,7 @@ export async function makeCultivarRow(ds: DataSource, epithet: string, variants:
   );
   const vrepo = ds.getRepository(CultivarVariant);
   for (const text of variants) {
-    await vrepo.save(vrepo.create({ cultivarId: c.id, text, normalized: text.toLowerCase().replace(/[^\p{L}\p{N}]+/gu, '') }));
+    await vrepo.save(vrepo.create({ cultivarId: c.id, text, normalized: normalizeName(text) }));
   }
   return c;
 }
