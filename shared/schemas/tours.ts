@@ -16,15 +16,29 @@ const isoDate = z
   .refine((s) => s >= '1900-01-01', 'That date is too early.')
   .refine((s) => Date.parse(`${s}T00:00:00Z`) <= Date.now() + 86_400_000, 'The filming date cannot be in the future.');
 
+const titleField = z.string().trim().min(3, 'Use at least 3 characters.').max(160, 'Use at most 160 characters.');
+const descriptionField = z.string().max(DESCRIPTION_MAX, 'The description is too long.');
+const gardenField = z.string().trim().max(160, 'Use at most 160 characters.');
+
 export const tourDetailsInput = z.object({
-  title: z.string().trim().min(3, 'Use at least 3 characters.').max(160, 'Use at most 160 characters.'),
-  descriptionHtml: z.string().max(DESCRIPTION_MAX, 'The description is too long.').default(''),
-  garden: z.string().trim().max(160, 'Use at most 160 characters.').default(''),
+  title: titleField,
+  descriptionHtml: descriptionField.default(''),
+  garden: gardenField.default(''),
   filmedOn: isoDate.nullable().default(null),
 });
 export type TourDetailsInput = z.infer<typeof tourDetailsInput>;
 
-export const updateTourInput = tourDetailsInput.partial();
+/**
+ * A PATCH changes only the fields it names. Built without defaults on purpose: zod 4 applies a
+ * default even inside .partial(), so `tourDetailsInput.partial()` would turn a missing garden or
+ * date into "" / null and wipe them whenever another field is saved.
+ */
+export const updateTourInput = z.object({
+  title: titleField.optional(),
+  descriptionHtml: descriptionField.optional(),
+  garden: gardenField.optional(),
+  filmedOn: isoDate.nullable().optional(),
+});
 export type UpdateTourInput = z.infer<typeof updateTourInput>;
 
 export const renditionSchema = z.object({ height: z.number(), width: z.number(), url: z.string(), bytes: z.number(), label: z.string() });
@@ -82,5 +96,9 @@ export type TourPage = z.infer<typeof tourPage>;
 export const listToursQuery = pageQuerySchema.extend({
   mine: z.enum(['1', '0']).optional(),
   author: z.coerce.number().int().min(1).optional(),
+  /** Browse filters: part of the garden's name; a cultivar record (id or slug) or a cultivar Group shown at some stop. */
+  garden: z.string().trim().min(1).max(160).optional(),
+  cultivar: z.string().trim().min(1).max(160).optional(),
+  group: z.string().trim().min(1).max(80).optional(),
 });
 export type ListToursQuery = z.infer<typeof listToursQuery>;

@@ -13,7 +13,14 @@ interface NavItem {
 }
 
 function navItemsFor(user: PublicUser | null | undefined): NavItem[] {
-  const items: NavItem[] = [{ to: '/', label: 'Home', end: true }];
+  const items: NavItem[] = [
+    { to: '/', label: 'Home', end: true },
+    { to: '/tours', label: 'Tours' },
+    { to: '/finder', label: 'Tree finder' },
+    { to: '/learn', label: 'Learn' },
+  ];
+  // Only hides the links; the server refuses uploads to anyone below author.
+  if (hasRole(user?.role, 'author')) items.push({ to: '/my/tours', label: 'My tours' });
   // Only hides the links; the server refuses these pages to anyone who is not an admin.
   if (hasRole(user?.role, 'admin')) {
     items.push({ to: '/admin/users', label: 'Users' }, { to: '/admin/outbox', label: 'Outbox' });

@@ -117,12 +117,32 @@ async function readJson(res: Response): Promise<unknown> {
 }
 
 function retryAfter(res: Response): number | null {
-  const raw = res.headers.get('retry-after');
+  return retryAfterSecondsOf(res.headers.get('retry-after'));
+}
+
+function retryAfterSecondsOf(raw: string | null): number | null {
   if (!raw) return null;
   const seconds = Number(raw);
   if (Number.isFinite(seconds) && seconds >= 0) return Math.ceil(seconds);
   const at = Date.parse(raw);
   return Number.isNaN(at) ? null : Math.max(0, Math.ceil((at - Date.now()) / 1000));
+}
+
+function errorFromBody(status: number, body: unknown, retryAfterSeconds: number | null): ApiError {
+  const parsed = apiErrorSchema.safeParse(body);
+  if (parsed.success) {
+    const { code, message, fields } = parsed.data.error;
+    return new ApiError({ status, code, message, fields, retryAfterSeconds });
+  }
+  return new ApiError({
+    status,
+    code: status >= 500 ? 'server_error' : 'http_error',
+    message:
+      status >= 500
+        ? 'The server ran into a problem. Try again in a moment.'
+        : `The request failed (HTTP ${status}). Reload the page and try again.`,
+    retryAfterSeconds,
+  });
 }
 
 /** Turns a failed response into an ApiError, whether or not it carries the usual error body. */
@@ -133,20 +153,28 @@ async function errorFrom(res: Response): Promise<ApiError> {
   } catch {
     body = undefined;
   }
-  const parsed = apiErrorSchema.safeParse(body);
-  if (parsed.success) {
-    const { code, message, fields } = parsed.data.error;
-    return new ApiError({ status: res.status, code, message, fields, retryAfterSeconds: retryAfter(res) });
+  return errorFromBody(res.status, body, retryAfter(res));
+}
+
+/**
+ * The same ApiError apiRequest would throw, for an answer read outside fetch (uploads go over
+ * XMLHttpRequest, the only browser API that reports upload progress). Status 0 means the request
+ * never got an answer.
+ */
+export function apiErrorFrom(status: number, bodyText: string, retryAfterHeader: string | null = null): ApiError {
+  if (status === 0) return new ApiError({ status: 0, code: 'network', message: NETWORK_MESSAGE });
+  let body: unknown;
+  try {
+    body = bodyText.trim() === '' ? undefined : (JSON.parse(bodyText) as unknown);
+  } catch {
+    body = undefined;
   }
-  return new ApiError({
-    status: res.status,
-    code: res.status >= 500 ? 'server_error' : 'http_error',
-    message:
-      res.status >= 500
-        ? 'The server ran into a problem. Try again in a moment.'
-        : `The request failed (HTTP ${res.status}). Reload the page and try again.`,
-    retryAfterSeconds: retryAfter(res),
-  });
+  return errorFromBody(status, body, retryAfterSecondsOf(retryAfterHeader));
+}
+
+/** The CSRF header for a change sent outside apiRequest (an upload over XMLHttpRequest). */
+export async function csrfHeader(): Promise<Record<string, string>> {
+  return { [CSRF_HEADER]: await csrfToken() };
 }
 
 /**

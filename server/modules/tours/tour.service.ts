@@ -1,6 +1,6 @@
 import { rename, rm, mkdir } from 'node:fs/promises';
 import path from 'node:path';
-import { In, type DataSource, type EntityManager } from 'typeorm';
+import { In, type DataSource, type EntityManager, type SelectQueryBuilder } from 'typeorm';
 import { hasRole } from '../../../shared/schemas/common';
 import type { ListToursQuery, TourDetailsInput, UpdateTourInput } from '../../../shared/schemas/tours';
 import { Job } from '../../db/entities/job.entity';
@@ -14,6 +14,29 @@ import { canEditTour, canViewTour } from './tour.policy';
 import { sanitizeRichText } from './sanitize';
 
 export const TRANSCODE_JOB = 'transcode';
+
+/**
+ * Browse filters of the tours list: garden (part of its name, wildcards escaped), cultivar (a stop
+ * linked to that record, by id or slug) and Group (a stop whose record is in that cultivar Group;
+ * "Dissectum" and "Dissectum Group" both work). The column collation ignores case.
+ */
+export function applyBrowseFilters(qb: SelectQueryBuilder<Tour>, q: Pick<ListToursQuery, 'garden' | 'cultivar' | 'group'>): void {
+  if (q.garden) qb.andWhere('t.garden LIKE :garden', { garden: `%${q.garden.replace(/[\\%_]/g, (c) => `\\${c}`)}%` });
+  if (q.cultivar) {
+    const byId = /^\d+$/.test(q.cultivar);
+    qb.andWhere(
+      `EXISTS (SELECT 1 FROM stops bs JOIN cultivars bc ON bc.id = bs.cultivar_id WHERE bs.tour_id = t.id AND ${byId ? 'bc.id = :browseCultivarId' : 'bc.slug = :browseCultivarSlug'})`,
+      byId ? { browseCultivarId: Number(q.cultivar) } : { browseCultivarSlug: q.cultivar.toLowerCase() },
+    );
+  }
+  if (q.group) {
+    const base = q.group.replace(/\s+group$/i, '').trim();
+    qb.andWhere(
+      'EXISTS (SELECT 1 FROM stops gs JOIN cultivars gc ON gc.id = gs.cultivar_id WHERE gs.tour_id = t.id AND (gc.group_name = :groupBase OR gc.group_name = :groupFull))',
+      { groupBase: base, groupFull: `${base} Group` },
+    );
+  }
+}
 
 /** An uploaded file as multer leaves it on disk. */
 export interface IncomingFile {
@@ -81,6 +104,7 @@ export class TourService {
       qb.where("t.state = 'published'").orderBy('t.publishedAt', 'DESC');
       if (q.author) qb.andWhere('t.authorId = :author', { author: q.author });
     }
+    applyBrowseFilters(qb, q);
     qb.addOrderBy('t.id', 'DESC').skip((q.page - 1) * q.pageSize).take(q.pageSize);
     const [items, total] = await qb.getManyAndCount();
     return { items, total, page: q.page, pageSize: q.pageSize };

@@ -51,6 +51,7 @@ describe('changedProfile (account page sends only what changed)', () => {
     role: 'viewer' as const,
     emailVerified: true,
     unitSystem: 'metric' as const,
+    hardinessZone: null,
     createdAt: '2024-04-01T10:00:00.000Z',
   };
 

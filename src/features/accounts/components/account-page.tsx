@@ -1,4 +1,4 @@
-import { useState } from 'react';
+import { useState, type ReactNode } from 'react';
 import { useNavigate } from 'react-router';
 import { changePasswordInput, PASSWORD_MIN, updateAccountInput, type PublicUser } from '@shared/schemas/auth';
 import { RoleBadge } from '@/components/badge';
@@ -122,7 +122,7 @@ function SignOutSection() {
 }
 
 /** The signed-in person's own settings: profile, units, password and signing out. */
-export function AccountPage({ user }: { user: PublicUser }) {
+export function AccountPage({ user, extraSections }: { user: PublicUser; extraSections?: ReactNode }) {
   const since = new Date(user.createdAt);
   return (
     <Page title="Your account" width="medium">
@@ -140,6 +140,8 @@ export function AccountPage({ user }: { user: PublicUser }) {
         <Card>
           <ProfileForm user={user} />
         </Card>
+        {/* Sections other features add (the route composes them), e.g. "My garden". */}
+        {extraSections}
         <Card>
           <PasswordForm />
         </Card>

@@ -59,8 +59,14 @@ function ClubSection() {
   return <ClubPanel club={club.data} />;
 }
 
+/** Props of HomePage; `publishedTours` is how many tours anyone can watch (undefined while unknown). */
+export interface HomePageProps {
+  publishedTours?: number;
+}
+
 /** The front door: what Grovewalk is for, the club the site serves, and what is on the way. */
-export function HomePage() {
+export function HomePage({ publishedTours }: HomePageProps) {
+  const walksOpen = (publishedTours ?? 0) > 0;
   useDocumentTitle('');
   return (
     <div className="mx-auto max-w-6xl px-4 sm:px-6">
@@ -85,18 +91,30 @@ export function HomePage() {
         </h2>
         <p className="mt-2 max-w-prose text-ink-soft">These parts are being built now and will open on this site one by one.</p>
         <ul className="mt-6 grid gap-5 md:grid-cols-3">
-          {plans.map((plan, i) => (
-            <li key={plan.title} className="rounded-lg border border-rule bg-card p-5 shadow-leaf">
-              <div className="flex items-center justify-between gap-2">
-                <span aria-hidden="true" className="grid size-9 place-items-center rounded-full bg-moss-wash font-bold text-moss-deep">
-                  {i + 1}
-                </span>
-                <Badge tone="bark">In preparation</Badge>
-              </div>
-              <h3 className="mt-4 text-lg">{plan.title}</h3>
-              <p className="mt-2 text-ink-soft">{plan.text}</p>
-            </li>
-          ))}
+          {plans.map((plan, i) => {
+            // The walks themselves can be watched once one is published; their tree cards are still to come.
+            const open = i === 0 && walksOpen;
+            return (
+              <li key={plan.title} className="rounded-lg border border-rule bg-card p-5 shadow-leaf">
+                <div className="flex items-center justify-between gap-2">
+                  <span aria-hidden="true" className="grid size-9 place-items-center rounded-full bg-moss-wash font-bold text-moss-deep">
+                    {i + 1}
+                  </span>
+                  {open ? <Badge tone="moss">Walks open, cards coming</Badge> : <Badge tone="bark">In preparation</Badge>}
+                </div>
+                <h3 className="mt-4 text-lg">{plan.title}</h3>
+                <p className="mt-2 text-ink-soft">{plan.text}</p>
+                {open && (
+                  <>
+                    <p className="mt-2 text-ink-soft">The filmed walks can be watched now; the tree cards beside them are being built.</p>
+                    <Link to="/tours" className={buttonClasses('secondary', 'sm', 'mt-4')}>
+                      Watch the tours ({publishedTours})
+                    </Link>
+                  </>
+                )}
+              </li>
+            );
+          })}
         </ul>
       </section>
     </div>

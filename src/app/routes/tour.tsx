@@ -1,0 +1,34 @@
+import { useParams, type LoaderFunctionArgs } from 'react-router';
+import { tourQueryOptions } from '@/features/tours/api/tours-api';
+import { TourEditPage } from '@/features/tours/components/tour-edit-page';
+import { TourNotFound } from '@/features/tours/components/tour-not-found';
+import { WatchPage } from '@/features/tours/components/watch-page';
+import { queryClient } from '@/lib/query-client';
+import { RequireUser } from '../guards';
+
+/** The tour id from the address, or null for anything that is not a positive whole number. */
+function tourIdOf(raw: string | undefined): number | null {
+  if (!raw || !/^\d{1,9}$/.test(raw)) return null;
+  const id = Number(raw);
+  return id >= 1 ? id : null;
+}
+
+/** Fetches the tour while the page's code is set up (both the tour page and its edit page). */
+export function tourLoader({ params }: LoaderFunctionArgs) {
+  const id = tourIdOf(params.tourId);
+  if (id) void queryClient.prefetchQuery(tourQueryOptions(id));
+  return null;
+}
+
+/** /tours/:tourId, the tour page. */
+export function TourRoute() {
+  const id = tourIdOf(useParams().tourId);
+  return id ? <WatchPage key={id} tourId={id} /> : <TourNotFound />;
+}
+
+/** /tours/:tourId/edit, for the author, moderators and admins (the server enforces it). */
+export function TourEditRoute() {
+  const id = tourIdOf(useParams().tourId);
+  if (!id) return <TourNotFound />;
+  return <RequireUser>{() => <TourEditPage key={id} tourId={id} />}</RequireUser>;
+}

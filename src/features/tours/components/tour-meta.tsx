@@ -1,0 +1,40 @@
+import type { ReactNode } from 'react';
+import type { TourDto } from '@shared/schemas/tours';
+import { durationInWords, formatClock, formatDay } from '../lib/media-format';
+
+/** Garden, author, date filmed and length on one line, leaving out what the author has not given. */
+export function TourMeta({ tour, showAuthor = true, className = '' }: { tour: TourDto; showAuthor?: boolean; className?: string }) {
+  const filmed = formatDay(tour.filmedOn);
+  const seconds = tour.durationMs != null ? tour.durationMs / 1000 : null;
+  const parts: { key: string; node: ReactNode }[] = [];
+  if (tour.garden) parts.push({ key: 'garden', node: tour.garden });
+  if (showAuthor && tour.author.displayName) parts.push({ key: 'author', node: <>by {tour.author.displayName}</> });
+  if (filmed) parts.push({ key: 'filmed', node: <>filmed {filmed}</> });
+  if (seconds != null)
+    parts.push({
+      key: 'length',
+      node: (
+        <>
+          <span aria-hidden="true" className="font-ui tabular-nums">
+            {formatClock(seconds)}
+          </span>
+          <span className="sr-only">{durationInWords(seconds)}</span>
+        </>
+      ),
+    });
+  if (parts.length === 0) return null;
+  return (
+    <p className={`flex flex-wrap gap-x-2 text-ink-soft ${className}`}>
+      {parts.map((part, i) => (
+        <span key={part.key}>
+          {i > 0 && (
+            <span aria-hidden="true" className="mr-2">
+              ·
+            </span>
+          )}
+          {part.node}
+        </span>
+      ))}
+    </p>
+  );
+}
