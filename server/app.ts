@@ -35,6 +35,12 @@ import { SpellingFixService } from './modules/spelling-fixes/spelling-fix.servic
 import { CultivarService } from './modules/cultivars/cultivar.service';
 import { stopRouter } from './modules/stops/stop.router';
 import { StopService } from './modules/stops/stop.service';
+import { searchRouter } from './modules/search/search.router';
+import { SearchService } from './modules/search/search.service';
+import { watchRouter } from './modules/watch/watch.router';
+import { WatchService } from './modules/watch/watch.service';
+import { authorRouter } from './modules/authors/author.router';
+import { AuthorService } from './modules/authors/author.service';
 
 export interface AppDeps {
   config: Config;
@@ -132,6 +138,9 @@ export function createApp(deps: AppDeps): AppHandle {
   api.use(captionRouter(captions, tours));
   api.use(stopRouter(new StopService(dataSource, tours, cultivars, captions)));
   api.use(cultivarRouter(cultivars));
+  api.use(searchRouter(new SearchService(dataSource)));
+  api.use(watchRouter(new WatchService(dataSource)));
+  api.use(authorRouter(new AuthorService(dataSource, tours)));
   const cultivarPhotos = new CultivarPhotoService(dataSource, config.mediaDir, cultivars);
   api.use(cultivarPhotoRouter(cultivarPhotos));
   api.use(glossaryRouter(new GlossaryService(dataSource, cultivars)));

@@ -142,7 +142,10 @@ describe('learn mode', () => {
   it('refuses a tampered token or a choice that was not offered', async () => {
     const q = await viewer.get('/api/learn/question');
     const [payload, sig] = q.body.token.split('.');
-    const forged = Buffer.from(Buffer.from(payload, 'base64url').toString().replace(/^\d+\.\d+/, '1.1')).toString('base64url');
+    // Point the signed payload at another answer: the signature must no longer match.
+    const parts = Buffer.from(payload, 'base64url').toString().split('.');
+    parts[1] = String(Number(parts[1]) + 1000);
+    const forged = Buffer.from(parts.join('.')).toString('base64url');
     expect((await viewer.post('/api/learn/answer', { token: `${forged}.${sig}`, chosenId: 1 })).status).toBe(400);
     expect((await viewer.post('/api/learn/answer', { token: q.body.token, chosenId: 999999 })).status).toBe(400);
   });

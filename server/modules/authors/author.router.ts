@@ -1,0 +1,22 @@
+import { Router } from 'express';
+import { z } from 'zod';
+import { pageQuerySchema } from '../../../shared/schemas/common';
+import { parsedQuery, validateQuery } from '../../middleware/validate';
+import { presentTour } from '../tours/tour.presenter';
+import type { AuthorService } from './author.service';
+
+const idParam = z.coerce.number().int().min(1);
+
+/** GET /api/authors/:id: display name, garden, published tour count and a page of their published tours. */
+export function authorRouter(authors: AuthorService): Router {
+  const r = Router();
+  r.get('/authors/:id', validateQuery(pageQuerySchema), async (req, res) => {
+    const { page, pageSize } = parsedQuery(res, pageQuerySchema);
+    const { user, tours } = await authors.page(idParam.parse(req.params.id), page, pageSize);
+    res.json({
+      author: { id: user.id, displayName: user.displayName, garden: user.garden, publishedTours: tours.total, memberSince: user.createdAt.toISOString() },
+      tours: { ...tours, items: tours.items.map((t) => presentTour(t, req.user)) },
+    });
+  });
+  return r;
+}

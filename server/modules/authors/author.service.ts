@@ -1,0 +1,25 @@
+import type { DataSource } from 'typeorm';
+import { hasRole } from '../../../shared/schemas/common';
+import { User } from '../../db/entities/user.entity';
+import { NotFound } from '../../errors/http-error';
+import type { TourService } from '../tours/tour.service';
+
+/**
+ * Public author pages. Someone is shown as an author when they may publish (author role or above)
+ * or have published tours; viewers' accounts and disabled accounts are not public pages.
+ */
+export class AuthorService {
+  constructor(
+    private readonly dataSource: DataSource,
+    private readonly tours: TourService,
+  ) {}
+
+  /** The author and one page of their published tours (newest first). */
+  async page(id: number, page: number, pageSize: number) {
+    const user = await this.dataSource.getRepository(User).findOneBy({ id });
+    if (!user || user.disabledAt) throw new NotFound('No such author.');
+    const tours = await this.tours.list({ author: id, page, pageSize }, undefined);
+    if (!hasRole(user.role, 'author') && tours.total === 0) throw new NotFound('No such author.');
+    return { user, tours };
+  }
+}
