@@ -5,6 +5,7 @@ import { hasRole } from '@shared/schemas/common';
 import { useMe, useSignOut } from '@/lib/auth';
 import { buttonClasses } from './button';
 import { LeafMark } from './leaf-mark';
+import { SiteSearch } from './site-search';
 
 interface NavItem {
   to: string;
@@ -18,9 +19,13 @@ function navItemsFor(user: PublicUser | null | undefined): NavItem[] {
     { to: '/tours', label: 'Tours' },
     { to: '/finder', label: 'Tree finder' },
     { to: '/learn', label: 'Learn' },
+    { to: '/cultivars', label: 'Cultivars' },
+    { to: '/glossary', label: 'Glossary' },
   ];
   // Only hides the links; the server refuses uploads to anyone below author.
   if (hasRole(user?.role, 'author')) items.push({ to: '/my/tours', label: 'My tours' });
+  // Only hides the link; the server refuses the queue to anyone below moderator.
+  if (hasRole(user?.role, 'moderator')) items.push({ to: '/moderation/spelling', label: 'Spelling fixes' });
   // Only hides the links; the server refuses these pages to anyone who is not an admin.
   if (hasRole(user?.role, 'admin')) {
     items.push({ to: '/admin/users', label: 'Users' }, { to: '/admin/outbox', label: 'Outbox' });
@@ -29,8 +34,18 @@ function navItemsFor(user: PublicUser | null | undefined): NavItem[] {
 }
 
 const navLinkClass = ({ isActive }: { isActive: boolean }) =>
-  'block rounded-md px-3 py-2 font-bold no-underline ' +
+  'block whitespace-nowrap rounded-md px-3 py-2 font-bold no-underline ' +
   (isActive ? 'bg-moss-wash text-moss-deep' : 'text-ink hover:bg-bark-wash hover:text-ink');
+
+/**
+ * Where the bar switches from the Menu button to the full row of links: signed-in members with
+ * more links need a wider screen before the row fits on one line.
+ */
+function breakpointFor(items: NavItem[]) {
+  return items.length > 6
+    ? { block: 'hidden xl:block', flex: 'hidden xl:flex', hide: 'xl:hidden' }
+    : { block: 'hidden lg:block', flex: 'hidden lg:flex', hide: 'lg:hidden' };
+}
 
 /** Opens on a click, closes on Escape, on a click elsewhere and on the next navigation. */
 function useDisclosure() {
@@ -135,10 +150,10 @@ function AccountMenu({ user }: { user: PublicUser }) {
   );
 }
 
-function PhoneMenu({ id, user, items }: { id: string; user: PublicUser | null | undefined; items: NavItem[] }) {
+function PhoneMenu({ id, user, items, hideClass }: { id: string; user: PublicUser | null | undefined; items: NavItem[]; hideClass: string }) {
   const signOut = useSignOutAndLeave();
   return (
-    <div id={id} className="border-t border-rule bg-card px-4 pt-2 pb-4 md:hidden">
+    <div id={id} className={`border-t border-rule bg-card px-4 pt-2 pb-4 ${hideClass}`}>
       <nav aria-label="Main">
         <ul className="space-y-1">
           {items.map((item) => (
@@ -193,22 +208,23 @@ function PhoneMenu({ id, user, items }: { id: string; user: PublicUser | null | 
 export function SiteHeader() {
   const { data: user } = useMe();
   const items = navItemsFor(user);
+  const shown = breakpointFor(items);
   const phone = useDisclosure();
   const phoneMenuId = useId();
 
   return (
     <header className="border-b border-rule bg-card">
-      <div className="mx-auto flex max-w-6xl items-center gap-2 px-4 py-2 sm:px-6 md:gap-6">
+      <div className="mx-auto flex max-w-6xl items-center gap-2 px-4 py-2 sm:px-6 lg:gap-4">
         <Link to="/" className="flex items-center gap-2 rounded-md py-2 pr-2 text-moss-deep no-underline hover:text-moss">
           <LeafMark className="size-8 text-moss" />
           <span className="text-2xl font-bold tracking-tight">Grovewalk</span>
         </Link>
 
-        <nav aria-label="Main" className="hidden md:block">
-          <ul className="flex gap-1">
+        <nav aria-label="Main" className={shown.block}>
+          <ul className="flex flex-wrap gap-0.5">
             {items.map((item) => (
               <li key={item.to}>
-                <NavLink to={item.to} end={item.end} className={navLinkClass}>
+                <NavLink to={item.to} end={item.end} className={(state) => navLinkClass(state).replace('px-3', 'px-2')}>
                   {item.label}
                 </NavLink>
               </li>
@@ -216,7 +232,7 @@ export function SiteHeader() {
           </ul>
         </nav>
 
-        <div className="ml-auto hidden items-center gap-3 md:flex">
+        <div className={`ml-auto items-center gap-3 ${shown.flex}`}>
           {user ? (
             <AccountMenu user={user} />
           ) : user === null ? (
@@ -236,7 +252,7 @@ export function SiteHeader() {
           aria-expanded={phone.open}
           aria-controls={phoneMenuId}
           onClick={phone.toggle}
-          className="ml-auto flex min-h-11 items-center gap-2 rounded-md border border-edge px-3 font-bold md:hidden"
+          className={`ml-auto flex min-h-11 items-center gap-2 rounded-md border border-edge px-3 font-bold ${shown.hide}`}
         >
           <svg viewBox="0 0 20 20" className="size-5" aria-hidden="true">
             {phone.open ? (
@@ -248,7 +264,10 @@ export function SiteHeader() {
           Menu
         </button>
       </div>
-      {phone.open && <PhoneMenu id={phoneMenuId} user={user} items={items} />}
+      <div className="mx-auto flex max-w-6xl px-4 pb-2 sm:px-6">
+        <SiteSearch className="w-full sm:ml-auto sm:max-w-md" />
+      </div>
+      {phone.open && <PhoneMenu id={phoneMenuId} user={user} items={items} hideClass={shown.hide} />}
     </header>
   );
 }

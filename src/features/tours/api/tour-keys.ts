@@ -1,7 +1,11 @@
-/** Paging of a tours list as sent to the API. */
+/** Paging of a tours list as sent to the API, with the browse filters of the public list. */
 export interface TourListParams {
   page: number;
   pageSize: number;
+  author?: number;
+  garden?: string;
+  cultivar?: string;
+  group?: string;
 }
 
 /**
@@ -17,4 +21,12 @@ export const tourKeys = {
   details: () => [...tourKeys.all, 'detail'] as const,
   detail: (id: number) => [...tourKeys.details(), id] as const,
   job: (id: number) => [...tourKeys.detail(id), 'job'] as const,
+  /** The tour page's one request (tour, stops with tree cards, caption tracks). */
+  watch: (id: number) => [...tourKeys.detail(id), 'watch'] as const,
+  /** Cues of a caption track for the transcript; the version makes an edited track a new entry. */
+  trackCues: (trackId: number, version: number) => [...tourKeys.all, 'track-cues', trackId, version] as const,
+  /** The cultivar record a browse filter names (for its printed name). */
+  browseRecord: (slug: string) => [...tourKeys.all, 'browse-record', slug] as const,
+  authors: () => [...tourKeys.all, 'author'] as const,
+  author: (id: number, page: number) => [...tourKeys.authors(), id, page] as const,
 };

@@ -278,6 +278,9 @@ function EditView({ tour }: { tour: TourDto }) {
         <div className="space-y-6 lg:col-start-2 lg:row-start-1">
           <TranscodePanel tour={tour} />
           <PublishPanel tour={tour} />
+          <Link to={`/tours/${tour.id}/captions`} className={buttonClasses('secondary', 'md', 'w-full')}>
+            Captions and stops
+          </Link>
         </div>
         <div className="space-y-6 lg:col-start-1 lg:row-span-2 lg:row-start-1">
           <Card>

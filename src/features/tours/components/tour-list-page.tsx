@@ -1,64 +1,215 @@
+import { useQuery } from '@tanstack/react-query';
+import { useEffect, useId, useMemo, useState, type FormEvent } from 'react';
 import { Link, useSearchParams } from 'react-router';
-import type { TourDto } from '@shared/schemas/tours';
+import { z } from 'zod';
 import { hasRole } from '@shared/schemas/common';
-import { buttonClasses } from '@/components/button';
+import { cultivarSummarySchema } from '@shared/schemas/cultivars';
+import { Button, buttonClasses } from '@/components/button';
+import { CultivarName } from '@/components/cultivar-name';
+import { CultivarPicker, type PickedCultivar } from '@/components/cultivar-picker';
 import { EmptyState } from '@/components/empty-state';
 import { ErrorState } from '@/components/error-state';
 import { Page } from '@/components/page';
 import { Pager } from '@/components/pager';
 import { Loading } from '@/components/spinner';
+import { api } from '@/lib/api';
 import { useMe } from '@/lib/auth';
-import { usePublicTours } from '../api/tours-api';
-import { durationInWords, formatClock, formatDay } from '../lib/media-format';
+import { tourKeys } from '../api/tour-keys';
+import { publicToursQueryOptions, usePublicTours } from '../api/tours-api';
+import { authorPageQueryOptions } from '../api/watch-api';
+import { BROWSE_GROUPS, filtersFromParams, hasFilters, listParams, paramsFromFilters, type BrowseFilters } from '../lib/browse-filters';
 import { pageFromParams } from '../lib/page-param';
-import { TourPoster } from './tour-poster';
+import { TourCard } from './tour-card';
 
 /** Tours per page of the public list (four rows of three on a wide screen). */
 export const TOURS_PAGE_SIZE = 12;
 
-function TourCard({ tour }: { tour: TourDto }) {
-  const seconds = tour.durationMs != null ? tour.durationMs / 1000 : null;
-  const filmed = formatDay(tour.filmedOn);
+/** How many published tours the author choices are drawn from (a club-sized list). */
+const AUTHOR_SOURCE_SIZE = 100;
+
+const recordResponse = z.object({ cultivar: cultivarSummarySchema });
+
+/** The record a cultivar filter names, to show its name and to start the picker with it. */
+function useFilterRecord(slug: string | undefined) {
+  return useQuery({
+    queryKey: tourKeys.browseRecord(slug ?? ''),
+    queryFn: ({ signal }) => api.get(`/api/cultivars/${encodeURIComponent(slug!)}`, { schema: recordResponse, signal }).then((r) => r.cultivar),
+    enabled: !!slug,
+    staleTime: 5 * 60_000,
+  });
+}
+
+/** Everyone who has published a tour (from the newest club-sized page), for the author choice. */
+function useAuthorChoices(current: number | undefined) {
+  const tours = useQuery({ ...publicToursQueryOptions({ page: 1, pageSize: AUTHOR_SOURCE_SIZE }), placeholderData: undefined });
+  const currentAuthor = useQuery({ ...authorPageQueryOptions(current ?? 0, 1), enabled: current != null });
+  return useMemo(() => {
+    const byId = new Map<number, string>();
+    for (const t of tours.data?.items ?? []) byId.set(t.author.id, t.author.displayName);
+    if (current != null && currentAuthor.data) byId.set(current, currentAuthor.data.author.displayName);
+    return [...byId.entries()].map(([id, name]) => ({ id, name })).sort((a, b) => a.name.localeCompare(b.name));
+  }, [tours.data, currentAuthor.data, current]);
+}
+
+function FilterForm({ filters, onApply }: { filters: BrowseFilters; onApply: (f: BrowseFilters) => void }) {
+  const ids = { author: useId(), garden: useId(), group: useId(), cultivar: useId() };
+  const [picking, setPicking] = useState(false);
+  const authors = useAuthorChoices(filters.author);
+  const record = useFilterRecord(filters.cultivar);
+  const [author, setAuthor] = useState(filters.author ? String(filters.author) : '');
+  const [garden, setGarden] = useState(filters.garden ?? '');
+  const [group, setGroup] = useState(filters.group ?? '');
+  const [picked, setPicked] = useState<PickedCultivar | null>(null);
+  const [cleared, setCleared] = useState(false);
+
+  // The form follows the address (back button, a link to a filtered list).
+  useEffect(() => {
+    setAuthor(filters.author ? String(filters.author) : '');
+    setGarden(filters.garden ?? '');
+    setGroup(filters.group ?? '');
+    setCleared(false);
+    setPicked(null);
+    setPicking(false);
+  }, [filters.author, filters.garden, filters.group, filters.cultivar]);
+
+  const chosen: PickedCultivar | null = picked ?? (!cleared && record.data ? record.data : null);
+
+  const submit = (e: FormEvent) => {
+    e.preventDefault();
+    onApply({
+      author: author ? Number(author) : undefined,
+      garden: garden.trim() || undefined,
+      group: group || undefined,
+      cultivar: chosen?.slug ?? (!cleared && filters.cultivar && !record.data ? filters.cultivar : undefined),
+    });
+  };
+
   return (
-    <li className="group relative overflow-hidden rounded-lg border border-rule bg-card shadow-leaf transition-shadow focus-within:shadow-none hover:border-edge">
-      <div className="relative">
-        <TourPoster url={tour.posterUrl} />
-        {seconds != null && (
-          <span className="absolute right-2 bottom-2 rounded bg-ink/85 px-1.5 py-0.5 font-ui text-xs font-semibold text-card tabular-nums">
-            <span aria-hidden="true">{formatClock(seconds)}</span>
-            <span className="sr-only">{durationInWords(seconds)}</span>
-          </span>
+    <form onSubmit={submit} aria-label="Filter tours" className="mb-8 rounded-lg border border-rule bg-card p-4 shadow-leaf">
+      <div className="grid gap-4 sm:grid-cols-3">
+        <div>
+          <label htmlFor={ids.author} className="block font-bold">
+            Author
+          </label>
+          <select id={ids.author} value={author} onChange={(e) => setAuthor(e.target.value)} className="mt-1 block min-h-11 w-full rounded-md border border-edge bg-card px-3">
+            <option value="">Anyone</option>
+            {authors.map((a) => (
+              <option key={a.id} value={String(a.id)}>
+                {a.name}
+              </option>
+            ))}
+          </select>
+        </div>
+        <div>
+          <label htmlFor={ids.garden} className="block font-bold">
+            Garden
+          </label>
+          <input
+            id={ids.garden}
+            type="text"
+            value={garden}
+            onChange={(e) => setGarden(e.target.value)}
+            maxLength={160}
+            placeholder="Part of its name"
+            className="mt-1 block min-h-11 w-full rounded-md border border-edge bg-card px-3 placeholder:text-ink-soft"
+          />
+        </div>
+        <div>
+          <label htmlFor={ids.group} className="block font-bold">
+            Cultivar Group
+          </label>
+          <select id={ids.group} value={group} onChange={(e) => setGroup(e.target.value)} className="mt-1 block min-h-11 w-full rounded-md border border-edge bg-card px-3">
+            <option value="">Any Group</option>
+            {BROWSE_GROUPS.map((g) => (
+              <option key={g} value={g}>
+                {g} Group
+              </option>
+            ))}
+            {group && !(BROWSE_GROUPS as readonly string[]).includes(group) && <option value={group}>{group} Group</option>}
+          </select>
+        </div>
+      </div>
+      <div className="mt-4">
+        {chosen || picking ? (
+          <CultivarPicker
+            label="Shows this cultivar"
+            hint="Tours with a stop at this tree. Type part of the name; misspellings are fine."
+            value={chosen}
+            onChange={(c) => {
+              setPicked(c);
+              setCleared(c === null);
+            }}
+          />
+        ) : (
+          <div>
+            <p className="font-bold" id={ids.cultivar}>
+              Shows this cultivar
+            </p>
+            <div className="mt-1 flex flex-wrap items-center gap-3" role="group" aria-labelledby={ids.cultivar}>
+              <span className="text-ink-soft">Any cultivar</span>
+              <Button variant="secondary" size="sm" onClick={() => setPicking(true)}>
+                Choose a cultivar
+              </Button>
+            </div>
+          </div>
         )}
       </div>
-      <div className="p-4">
-        <h2 className="text-lg leading-snug">
-          {/* The link covers the whole card, so the card is one click target with one name. */}
-          <Link to={`/tours/${tour.id}`} className="text-ink no-underline after:absolute after:inset-0 hover:text-moss-deep group-hover:underline">
-            {tour.title}
+      <div className="mt-4 flex flex-wrap gap-3">
+        <Button type="submit">Show tours</Button>
+        {hasFilters(filters) && (
+          <Link to="/tours" className={buttonClasses('quiet')}>
+            Clear filters
           </Link>
-        </h2>
-        {tour.garden && <p className="mt-1 text-sm text-bark">{tour.garden}</p>}
-        <p className="mt-1 text-sm text-ink-soft">
-          by {tour.author.displayName}
-          {filmed && <> · filmed {filmed}</>}
-        </p>
+        )}
       </div>
-    </li>
+    </form>
   );
 }
 
-/** The public list of published tours, newest first, a page at a time (the page is in the address). */
+function ActiveFilters({ filters, authorName, cultivar }: { filters: BrowseFilters; authorName: string | null; cultivar: { acceptedName: string; nameSegments: { text: string; italic: boolean }[] } | null }) {
+  if (!hasFilters(filters)) return null;
+  const parts = [
+    filters.author && <>by {authorName ?? `author ${filters.author}`}</>,
+    filters.garden && <>in a garden called “{filters.garden}”</>,
+    filters.group && <>showing a tree of the {filters.group} Group</>,
+    filters.cultivar && <>showing {cultivar ? <CultivarName record={cultivar} /> : `“${filters.cultivar}”`}</>,
+  ].filter(Boolean);
+  return (
+    <p role="status" className="mb-4 font-ui text-sm text-ink-soft">
+      Tours{' '}
+      {parts.map((p, i) => (
+        <span key={i}>
+          {i > 0 && ', '}
+          {p}
+        </span>
+      ))}
+      .
+    </p>
+  );
+}
+
+/** The public list of published tours, newest first, with browse filters and pages (all in the address). */
 export function TourListPage() {
   const [params, setParams] = useSearchParams();
   const page = pageFromParams(params);
-  const tours = usePublicTours({ page, pageSize: TOURS_PAGE_SIZE });
+  const filters = useMemo(() => filtersFromParams(params), [params]);
+  const tours = usePublicTours(listParams(filters, page, TOURS_PAGE_SIZE));
   const { data: me } = useMe();
   const canUpload = hasRole(me?.role, 'author');
+  const authorPage = useQuery({ ...authorPageQueryOptions(filters.author ?? 0, 1), enabled: filters.author != null });
+  const record = useFilterRecord(filters.cultivar);
+  const filtered = hasFilters(filters);
 
   let body;
   if (tours.isPending) body = <Loading label="Loading tours…" />;
   else if (tours.isError) body = <ErrorState title="The tours could not be loaded" error={tours.error} onRetry={() => void tours.refetch()} />;
-  else if (tours.data.items.length === 0 && tours.data.total === 0) {
+  else if (tours.data.items.length === 0 && tours.data.total === 0 && filtered) {
+    body = (
+      <EmptyState title="No published tour matches these filters.">
+        <Link to="/tours">Show all tours</Link>
+      </EmptyState>
+    );
+  } else if (tours.data.items.length === 0 && tours.data.total === 0) {
     body = (
       <EmptyState title="No tours are published yet.">
         {canUpload ? (
@@ -73,7 +224,7 @@ export function TourListPage() {
   } else if (tours.data.items.length === 0) {
     body = (
       <EmptyState title="This page is past the end of the list.">
-        <Link to="/tours">Go to the first page</Link>
+        <Link to={`/tours?${paramsFromFilters(filters).toString()}`}>Go to the first page</Link>
       </EmptyState>
     );
   } else {
@@ -84,13 +235,7 @@ export function TourListPage() {
             <TourCard key={tour.id} tour={tour} />
           ))}
         </ul>
-        <Pager
-          label="Pages of tours"
-          page={page}
-          pageSize={TOURS_PAGE_SIZE}
-          total={tours.data.total}
-          onPageChange={(next) => setParams(next === 1 ? {} : { page: String(next) })}
-        />
+        <Pager label="Pages of tours" page={page} pageSize={TOURS_PAGE_SIZE} total={tours.data.total} onPageChange={(next) => setParams(paramsFromFilters(filters, next))} />
       </>
     );
   }
@@ -107,6 +252,8 @@ export function TourListPage() {
           </Link>
         </div>
       )}
+      <FilterForm filters={filters} onApply={(f) => setParams(paramsFromFilters(f))} />
+      <ActiveFilters filters={filters} authorName={authorPage.data?.author.displayName ?? null} cultivar={record.data ?? null} />
       {body}
     </Page>
   );

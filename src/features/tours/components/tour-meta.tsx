@@ -1,14 +1,24 @@
 import type { ReactNode } from 'react';
+import { Link } from 'react-router';
 import type { TourDto } from '@shared/schemas/tours';
 import { durationInWords, formatClock, formatDay } from '../lib/media-format';
 
-/** Garden, author, date filmed and length on one line, leaving out what the author has not given. */
+/** Garden, author (linked to their page), date filmed and length on one line, leaving out what the author has not given. */
 export function TourMeta({ tour, showAuthor = true, className = '' }: { tour: TourDto; showAuthor?: boolean; className?: string }) {
   const filmed = formatDay(tour.filmedOn);
   const seconds = tour.durationMs != null ? tour.durationMs / 1000 : null;
   const parts: { key: string; node: ReactNode }[] = [];
   if (tour.garden) parts.push({ key: 'garden', node: tour.garden });
-  if (showAuthor && tour.author.displayName) parts.push({ key: 'author', node: <>by {tour.author.displayName}</> });
+  if (showAuthor && tour.author.displayName) {
+    parts.push({
+      key: 'author',
+      node: (
+        <>
+          by <Link to={`/authors/${tour.author.id}`}>{tour.author.displayName}</Link>
+        </>
+      ),
+    });
+  }
   if (filmed) parts.push({ key: 'filmed', node: <>filmed {filmed}</> });
   if (seconds != null)
     parts.push({

@@ -1,26 +1,71 @@
 import videojs from 'video.js';
 import 'video.js/dist/video-js.css';
 import './tour-player.css';
-import { useEffect, useId, useRef, useState, type KeyboardEvent as ReactKeyboardEvent } from 'react';
+import { useEffect, useId, useRef, useState, type KeyboardEvent as ReactKeyboardEvent, type ReactNode } from 'react';
 import { createPortal } from 'react-dom';
 import type { Rendition } from '@shared/schemas/tours';
-import { Button } from '@/components/button';
+import type { WatchResponse } from '@shared/schemas/watch';
 import { formatClock } from '../lib/media-format';
-import { nextSpeed, PLAYBACK_SPEEDS, playerActionForKey, seekTarget, SHORTCUT_HELP, speedLabel, type PlayerAction } from '../lib/player-keys';
+import type { PlayerController } from '../lib/player-controller';
+import { nextSpeed, PLAYBACK_SPEEDS, playerActionForKey, seekTarget, speedLabel, type PlayerAction } from '../lib/player-keys';
 import { pickRendition } from '../lib/renditions';
-import { clampStart, linkAtMoment } from '../lib/start-time';
+import { clampStart } from '../lib/start-time';
+import { stopIdFromActiveCues, stopIndexAt, type TimedStop } from '../lib/stop-timeline';
 import { thumbTileAt, type ThumbStrip, type ThumbTile } from '../lib/thumb-tiles';
+import { readCaptionsOn, writeCaptionsOn } from '../lib/watch-links';
 
 type Player = ReturnType<typeof videojs>;
 
-/** Props of TourPlayer: the tour's media as the API describes it, and where to start. */
+/** Props of TourPlayer: the tour's media as the API describes it, where to start, and what the page listens to. */
 export interface TourPlayerProps {
   title: string;
   renditions: Rendition[];
   posterUrl: string | null;
   thumbStrip: ThumbStrip | null;
-  /** Seconds from a ?t= link; null starts at the beginning. */
+  /** Seconds from a ?t= link or a stop's own address; null starts at the beginning. */
   startAt: number | null;
+  /** Caption tracks (WebVTT), the chapters track and the metadata track the tree card follows. */
+  captions?: WatchResponse['captions'] | null;
+  /** The stops, drawn as marks on the progress bar. */
+  stops?: readonly TimedStop[];
+  /** The tour's length from the server, until the video reports its own. */
+  durationMs?: number | null;
+  /** A cue change on the metadata track: the stop now playing, or null between stops. */
+  onStopCue?: (stopId: number | null) => void;
+  /** The playhead moved (playing, seeking); seconds. */
+  onTime?: (seconds: number) => void;
+  /** The player is ready (a handle), or gone (null). */
+  onReady?: (controller: PlayerController | null) => void;
+  /** The next- or previous-stop key was pressed on the video. */
+  onStopStep?: (step: 1 | -1) => void;
+  /** The "?" key was pressed on the video. */
+  onHelp?: () => void;
+  /** Names the keyboard help for screen readers (the video's description). */
+  helpHint?: string;
+  /** The page's own buttons, shown in the row under the video after Quality and Speed. */
+  toolbar?: ReactNode;
+}
+
+type MediaTextTrack = TextTrack & { addEventListener(type: 'cuechange', fn: () => void): void; removeEventListener(type: 'cuechange', fn: () => void): void };
+
+function textTracksOf(player: Player): MediaTextTrack[] {
+  return Array.from(player.textTracks() as unknown as ArrayLike<MediaTextTrack>);
+}
+
+function captionTracksOf(player: Player): MediaTextTrack[] {
+  return textTracksOf(player).filter((t) => t.kind === 'captions' || t.kind === 'subtitles');
+}
+
+/** The stops as small marks on the video's progress bar, placed by start time; decorative (the trail and the stops list name them). */
+function StopMarks({ stops, durationSec }: { stops: readonly TimedStop[]; durationSec: number }) {
+  if (!(durationSec > 0)) return null;
+  return (
+    <div className="gw-stop-marks" aria-hidden="true">
+      {stops.map((s) => (
+        <span key={s.id} className="gw-stop-mark" style={{ left: `${Math.min(100, (s.startMs / 1000 / durationSec) * 100)}%` }} />
+      ))}
+    </div>
+  );
 }
 
 const PREVIEW_WIDTH = 176;
@@ -52,6 +97,14 @@ function ThumbPreview({ preview }: { preview: Preview }) {
       <span>{formatClock(preview.seconds)}</span>
     </div>
   );
+}
+
+function safeStorage(): Storage | null {
+  try {
+    return window.localStorage;
+  } catch {
+    return null;
+  }
 }
 
 function useThumbPreview(player: Player | null, strip: ThumbStrip | null) {
@@ -89,21 +142,43 @@ function useThumbPreview(player: Player | null, strip: ThumbStrip | null) {
 }
 
 /**
- * The tour's video with video.js, plus Grovewalk's own controls beside it: version ("Quality"),
- * speed, "Copy link at this moment" and the keyboard map. video.js and its styles live only in
- * this module, which the tour page loads lazily, so they are a chunk of their own.
+ * The tour's video with video.js and Grovewalk's own controls beside it: version ("Quality") and
+ * speed. It adds the caption tracks (on by default, the viewer's choice remembered), the chapters
+ * track, the stops as marks on the progress bar, and the hidden metadata track whose cue changes
+ * tell the page which stop is playing. video.js and its styles live only in this module, which
+ * the tour page loads lazily, so they are a chunk of their own.
  */
-export function TourPlayer({ title, renditions, posterUrl, thumbStrip, startAt }: TourPlayerProps) {
+export function TourPlayer({
+  title,
+  renditions,
+  posterUrl,
+  thumbStrip,
+  startAt,
+  captions = null,
+  stops = [],
+  durationMs = null,
+  onStopCue,
+  onTime,
+  onReady,
+  onStopStep,
+  onHelp,
+  helpHint = 'Press the question mark key for the list of keyboard keys.',
+  toolbar,
+}: TourPlayerProps) {
   const holder = useRef<HTMLDivElement>(null);
   const [player, setPlayer] = useState<Player | null>(null);
   const [source, setSource] = useState<string>('');
   const [speed, setSpeed] = useState(1);
   const [message, setMessage] = useState('');
-  const [copied, setCopied] = useState<{ url: string; ok: boolean; at: number } | null>(null);
+  const [durationSec, setDurationSec] = useState(durationMs != null ? durationMs / 1000 : 0);
+  const [progressHolder, setProgressHolder] = useState<HTMLElement | null>(null);
   const helpId = useId();
   const qualityId = useId();
   const speedId = useId();
   const preview = useThumbPreview(player, thumbStrip);
+  // The page's callbacks change on every render; the player's listeners read the latest through this.
+  const listeners = useRef({ onStopCue, onTime, onStopStep, onHelp, stops });
+  listeners.current = { onStopCue, onTime, onStopStep, onHelp, stops };
 
   // One player per mount; video.js owns the element it is given, so React never renders it.
   useEffect(() => {
@@ -129,15 +204,73 @@ export function TourPlayer({ title, renditions, posterUrl, thumbStrip, startAt }
     root.setAttribute('aria-describedby', helpId);
     setSource(first?.url ?? '');
     p.on('ratechange', () => setSpeed(p.playbackRate() ?? 1));
+    p.on('loadedmetadata', () => {
+      const d = p.duration();
+      if (d && Number.isFinite(d)) setDurationSec(d);
+    });
     if (startAt != null && startAt > 0) {
       p.one('loadedmetadata', () => {
         const at = clampStart(startAt, p.duration());
-        if (at > 0) p.currentTime(at);
+        if (at > 0) {
+          p.currentTime(at);
+          // Show the frame at that moment, not the cover picture, even before play is pressed.
+          p.hasStarted(true);
+        }
       });
     }
+
+    // The tree card follows the metadata track's cue changes, not the clock. Should that track be
+    // unusable (no cues loaded), the stop is worked out from the playhead instead.
+    let metaTrack: MediaTextTrack | null = null;
+    let lastStop: number | null | undefined;
+    const tellStop = (id: number | null) => {
+      if (id === lastStop) return;
+      lastStop = id;
+      listeners.current.onStopCue?.(id);
+    };
+    const onCueChange = () => tellStop(stopIdFromActiveCues(metaTrack?.activeCues as unknown as ArrayLike<{ startTime: number; text: string }>));
+
+    // Tracks can be added once the playback technology is loaded (a moment after the player).
+    p.ready(() => {
+      // Captions: on unless the viewer turned them off last time; the choice is remembered below.
+      const captionsOn = readCaptionsOn(safeStorage());
+      for (const t of captions?.tracks ?? []) {
+        const shown = captionsOn && t.id === captions?.defaultTrackId;
+        p.addRemoteTextTrack({ kind: 'captions', src: t.vttUrl, srclang: t.lang, label: t.label, mode: shown ? 'showing' : 'disabled', default: shown }, false);
+      }
+      if (captions && stops.length > 0) {
+        p.addRemoteTextTrack({ kind: 'chapters', src: captions.chaptersUrl, srclang: 'en', label: 'Stops', default: true }, false);
+        const el = p.addRemoteTextTrack({ kind: 'metadata', src: captions.metadataUrl, label: 'Tree cards', mode: 'hidden' }, false) as unknown as { track: MediaTextTrack } | undefined;
+        if (el) {
+          metaTrack = el.track;
+          metaTrack.mode = 'hidden';
+          metaTrack.addEventListener('cuechange', onCueChange);
+        }
+      }
+      const tracks = p.textTracks() as unknown as { on(type: string, fn: () => void): void };
+      tracks.on('change', () => {
+        const list = captionTracksOf(p);
+        if (list.length > 0) writeCaptionsOn(safeStorage(), list.some((t) => t.mode === 'showing'));
+      });
+    });
+    const onTimeUpdate = () => {
+      const now = p.currentTime() ?? 0;
+      listeners.current.onTime?.(now);
+      const cues = metaTrack?.cues;
+      if (listeners.current.stops.length > 0 && (!cues || cues.length === 0)) {
+        const i = stopIndexAt(listeners.current.stops, now * 1000);
+        tellStop(i >= 0 ? listeners.current.stops[i]!.id : null);
+      }
+    };
+    p.on('timeupdate', onTimeUpdate);
+    p.on('seeked', onTimeUpdate);
+
     setPlayer(p);
+    setProgressHolder(root.querySelector<HTMLElement>('.vjs-progress-holder'));
     return () => {
+      metaTrack?.removeEventListener('cuechange', onCueChange);
       setPlayer(null);
+      setProgressHolder(null);
       p.dispose();
     };
     // The tour page remounts this component for another tour, so the first props are the only ones.
@@ -207,18 +340,44 @@ export function TourPlayer({ title, renditions, posterUrl, thumbStrip, startAt }
         break;
       }
       case 'toggle-captions': {
-        const tracks = Array.from(player.textTracks() as unknown as ArrayLike<TextTrack>).filter((t) => t.kind === 'captions' || t.kind === 'subtitles');
+        const tracks = captionTracksOf(player);
         if (tracks.length === 0) {
           say('This tour has no captions yet');
           break;
         }
         const on = tracks.some((t) => t.mode === 'showing');
-        tracks.forEach((t, i) => (t.mode = !on && i === 0 ? 'showing' : 'disabled'));
+        const preferred = Math.max(0, captions?.tracks.findIndex((t) => t.id === captions.defaultTrackId) ?? 0);
+        tracks.forEach((t, i) => (t.mode = !on && i === Math.min(preferred, tracks.length - 1) ? 'showing' : 'disabled'));
         say(on ? 'Captions off' : 'Captions on');
         break;
       }
+      case 'stop':
+        listeners.current.onStopStep?.(action.step);
+        break;
+      case 'help':
+        listeners.current.onHelp?.();
+        break;
     }
   };
+
+  // The page's handle on this player; `run` is rebuilt each render, so the handle reads it through a ref.
+  const runRef = useRef(run);
+  runRef.current = run;
+  useEffect(() => {
+    if (!player) return;
+    const controller: PlayerController = {
+      seek: (seconds) => {
+        player.currentTime(Math.max(0, seconds));
+        if (seconds > 0) player.hasStarted(true);
+      },
+      currentTime: () => player.currentTime() ?? 0,
+      run: (action) => runRef.current(action),
+      focus: () => (player.el() as HTMLElement).focus(),
+    };
+    onReady?.(controller);
+    return () => onReady?.(null);
+    // onReady is the page's state setter; only a new player means a new handle.
+  }, [player]);
 
   const onKeyDown = (event: ReactKeyboardEvent<HTMLDivElement>) => {
     const target = event.target as HTMLElement;
@@ -227,6 +386,7 @@ export function TourPlayer({ title, renditions, posterUrl, thumbStrip, startAt }
       ctrlKey: event.ctrlKey,
       metaKey: event.metaKey,
       altKey: event.altKey,
+      shiftKey: event.shiftKey,
       targetTag: target.tagName,
       targetRole: target.getAttribute('role'),
     });
@@ -236,23 +396,14 @@ export function TourPlayer({ title, renditions, posterUrl, thumbStrip, startAt }
     run(action);
   };
 
-  const copyLink = async () => {
-    if (!player) return;
-    const at = player.currentTime() ?? 0;
-    const url = linkAtMoment(window.location.href, at);
-    try {
-      await navigator.clipboard.writeText(url);
-      setCopied({ url, ok: true, at });
-    } catch {
-      // No clipboard access (older browsers, plain http): show the link to copy by hand.
-      setCopied({ url, ok: false, at });
-    }
-  };
-
   return (
     <div className="space-y-3">
       <div ref={holder} onKeyDown={onKeyDown} className="overflow-hidden rounded-lg bg-ink shadow-leaf" />
       {player && preview && createPortal(<ThumbPreview preview={preview} />, player.el())}
+      {progressHolder && stops.length > 0 && createPortal(<StopMarks stops={stops} durationSec={durationSec} />, progressHolder)}
+      <p id={helpId} className="sr-only">
+        {helpHint}
+      </p>
       <p role="status" className="sr-only">
         {message}
       </p>
@@ -295,60 +446,8 @@ export function TourPlayer({ title, renditions, posterUrl, thumbStrip, startAt }
             {!(PLAYBACK_SPEEDS as readonly number[]).includes(speed) && <option value={String(speed)}>{speedLabel(speed)}</option>}
           </select>
         </div>
-        <Button variant="secondary" size="sm" onClick={() => void copyLink()} disabled={!player}>
-          Copy link at this moment
-        </Button>
+        {toolbar}
       </div>
-
-      {copied && (
-        <div role="status" className="rounded-md border-l-4 border-moss bg-moss-wash px-4 py-2 text-sm">
-          {copied.ok ? (
-            <p>
-              Link copied. It opens the tour at <span className="font-ui tabular-nums">{formatClock(copied.at)}</span>.
-            </p>
-          ) : (
-            <label className="block">
-              <span className="block">Copy this link; it opens the tour at {formatClock(copied.at)}:</span>
-              <input readOnly value={copied.url} onFocus={(e) => e.currentTarget.select()} className="mt-1 w-full rounded border border-edge bg-card px-2 py-1 font-mono text-xs" />
-            </label>
-          )}
-        </div>
-      )}
-
-      <details className="rounded-lg border border-rule bg-card px-4 py-2 text-sm">
-        <summary className="cursor-pointer font-bold">Keyboard</summary>
-        <p id={helpId} className="mt-2 text-ink-soft">
-          Select the video (click it or move to it with Tab), then use these keys.
-        </p>
-        <table className="mt-2 mb-2 w-full max-w-md text-left">
-          <caption className="sr-only">Keyboard shortcuts for the video</caption>
-          <thead>
-            <tr>
-              <th scope="col" className="py-1 pr-4 font-bold">
-                Keys
-              </th>
-              <th scope="col" className="py-1 font-bold">
-                What they do
-              </th>
-            </tr>
-          </thead>
-          <tbody>
-            {SHORTCUT_HELP.map((row) => (
-              <tr key={row.does} className="border-t border-rule">
-                <td className="py-1 pr-4 whitespace-nowrap">
-                  {row.keys.map((k, i) => (
-                    <span key={k}>
-                      {i > 0 && ' or '}
-                      <kbd className="rounded border border-edge bg-paper px-1.5 py-0.5 font-mono text-xs">{k}</kbd>
-                    </span>
-                  ))}
-                </td>
-                <td className="py-1">{row.does}</td>
-              </tr>
-            ))}
-          </tbody>
-        </table>
-      </details>
     </div>
   );
 }

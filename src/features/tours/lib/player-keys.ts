@@ -9,7 +9,9 @@ export type PlayerAction =
   | { kind: 'toggle-fullscreen' }
   | { kind: 'speed'; step: 1 | -1 }
   | { kind: 'toggle-captions' }
-  | { kind: 'jump'; to: 'start' | 'end' };
+  | { kind: 'jump'; to: 'start' | 'end' }
+  | { kind: 'stop'; step: 1 | -1 }
+  | { kind: 'help' };
 
 /** The parts of a keyboard event the shortcut map looks at (a plain object in tests). */
 export interface KeyPress {
@@ -17,6 +19,7 @@ export interface KeyPress {
   ctrlKey?: boolean;
   metaKey?: boolean;
   altKey?: boolean;
+  shiftKey?: boolean;
   /** The focused element's tag and role, so keys that element uses itself are left to it. */
   targetTag?: string;
   targetRole?: string | null;
@@ -32,16 +35,20 @@ export const SHORTCUT_HELP: { keys: string[]; does: string }[] = [
   { keys: ['F'], does: 'Full screen on or off' },
   { keys: ['<', '>'], does: 'Slower or faster' },
   { keys: ['C'], does: 'Captions on or off (once the tour has captions)' },
+  { keys: ['Shift + →', 'N'], does: 'Next stop on the trail' },
+  { keys: ['Shift + ←', 'P'], does: 'Previous stop on the trail' },
+  { keys: ['?'], does: 'Show this list of keys' },
 ];
 
 const BUTTONLIKE = new Set(['BUTTON', 'A', 'SUMMARY']);
 const TYPING = new Set(['INPUT', 'SELECT', 'TEXTAREA']);
 
 /**
- * Maps a key press inside the player region to an action, or null to let the browser handle it.
- * Keys with Ctrl, Cmd or Alt are never taken (browser and screen-reader commands), typing in a
- * field is never taken, Space is left to a focused button, and arrows to a focused slider (the
- * progress and volume bars move themselves).
+ * Maps a key press inside the player region (the video, the trail, the tree card and the
+ * transcript) to an action, or null to let the browser handle it. Keys with Ctrl, Cmd or Alt are
+ * never taken (browser and screen-reader commands), typing in a field is never taken, Space is
+ * left to a focused button, and arrows (with or without Shift) to a focused slider (the progress
+ * and volume bars move themselves).
  */
 export function playerActionForKey(press: KeyPress): PlayerAction | null {
   if (press.ctrlKey || press.metaKey || press.altKey) return null;
@@ -49,6 +56,9 @@ export function playerActionForKey(press: KeyPress): PlayerAction | null {
   if (TYPING.has(tag)) return null;
   const onButton = BUTTONLIKE.has(tag) || press.targetRole === 'button' || press.targetRole === 'menuitem' || press.targetRole === 'menuitemradio';
   const onSlider = press.targetRole === 'slider';
+  if (press.shiftKey && (press.key === 'ArrowLeft' || press.key === 'ArrowRight')) {
+    return onSlider ? null : { kind: 'stop', step: press.key === 'ArrowRight' ? 1 : -1 };
+  }
   switch (press.key) {
     case ' ':
     case 'Spacebar':
@@ -83,6 +93,14 @@ export function playerActionForKey(press: KeyPress): PlayerAction | null {
     case 'c':
     case 'C':
       return { kind: 'toggle-captions' };
+    case 'n':
+    case 'N':
+      return { kind: 'stop', step: 1 };
+    case 'p':
+    case 'P':
+      return { kind: 'stop', step: -1 };
+    case '?':
+      return { kind: 'help' };
     default:
       return null;
   }
