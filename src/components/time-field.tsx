@@ -75,7 +75,7 @@ export function TimeField({ label, valueMs, onCommit, durationMs, hideLabel = fa
         }}
         onBlur={commit}
         onKeyDown={onKeyDown}
-        className={`block w-[8.5rem] rounded-md border bg-card px-2 py-1 font-mono text-sm text-ink tabular-nums ${message ? 'border-2 border-maple' : 'border-edge'}`}
+        className={`block w-[7.25rem] rounded-md border bg-card px-2 py-1 font-mono text-sm text-ink tabular-nums ${message ? 'border-2 border-maple' : 'border-edge'}`}
       />
       {message && (
         <p id={`${id}-error`} className="mt-1 max-w-[16rem] text-xs font-bold text-maple">

@@ -55,6 +55,8 @@ let page: Page;
 let dir: string;
 let srtFile: string;
 let tourId = 0;
+/** Uncaught errors in the page; the journey must end without any. */
+const pageErrors: string[] = [];
 
 /** expect.poll with room for a busy machine: two cores shared by the server, ffmpeg and Chromium. */
 function eventually<T>(fn: () => T | Promise<T>, timeout = 15_000) {
@@ -94,6 +96,16 @@ async function exportedVtt(p: Page): Promise<string> {
   return r.text();
 }
 
+/** Waits until the editor's readout shows the playhead at `time` (a seek settles in a moment). */
+async function playheadAt(time: string) {
+  try {
+    await eventually(() => page.getByText(new RegExp(`^Playhead at ${time.replace('.', '\\.')} /`)).count()).toBe(1);
+  } catch (error) {
+    await shot(page, SUITE, `failed-playhead-${time.replace(/[:.]/g, '-')}`);
+    throw error;
+  }
+}
+
 async function tab(p: Page, name: 'Cues' | 'Stops' | 'Downloads') {
   await p.getByRole('tab', { name: new RegExp(`^${name}`) }).click();
 }
@@ -105,6 +117,7 @@ beforeAll(async () => {
   const clip = await generateClip(path.join(dir, 'pond-corner.mp4'), { seconds: CLIP_SECONDS, width: 640, height: 360, audio: true, label: 'Fernhollow captions test - fictional' });
   browser = await openBrowser();
   page = browser.page;
+  page.on('pageerror', (error) => pageErrors.push(error.message));
   await signIn(page);
   // Upload through the API with the signed-in browser's own session (the upload page has its own e2e test).
   const r = await page.request.post(`${base}/api/tours`, {
@@ -131,8 +144,6 @@ describe('an author captions a tour and marks its stops', () => {
   });
 
   it('finds "Captions and stops" on the edit page and sees the empty editor', async () => {
-    page.on('pageerror', (e) => console.log('PAGEERROR', e.message));
-    page.on('console', (m) => m.type() === 'error' && console.log('CONSOLE', m.text()));
     await page.goto(`${base}/tours/${tourId}/edit`);
     await page.getByRole('heading', { level: 1, name: 'Edit tour' }).waitFor().catch(() => undefined);
     await shot(page, SUITE, '00-edit-page');
@@ -218,9 +229,24 @@ describe('an author captions a tour and marks its stops', () => {
     await page.getByLabel('Only cues with issues').uncheck();
   });
 
+  it('asks before leaving while a change is not saved yet', async () => {
+    await page.getByRole('textbox', { name: 'Text of cue 3' }).click();
+    await page.keyboard.press('End');
+    await page.keyboard.type(' Shade it.');
+    await page.getByRole('link', { name: 'Edit tour' }).click();
+    const dialog = page.getByRole('dialog', { name: 'Leave with unsaved changes?' });
+    await dialog.waitFor();
+    await shot(page, SUITE, '05b-leave-guard');
+    await dialog.getByRole('button', { name: 'Stay here' }).click();
+    expect(page.url()).toContain(`/tours/${tourId}/captions`);
+    await eventually(() => page.getByText(/^Saved at \d\d:\d\d$/).count(), 20_000).toBe(1);
+    expect((await openTrack(page)).cues[2]!.text).toBe('Its cream flecks burn in hot sun. Shade it.');
+  });
+
   it('adds two stops linked to cultivar records with the picker', async () => {
     // Stop for Mizu-kagari from the playhead at cue 4 (13 s): ten seconds, within the clip.
     await page.getByRole('button', { name: /^Cue 4, go to/ }).click();
+    await playheadAt('00:13.000');
     await tab(page, 'Stops');
     await page.getByRole('button', { name: 'Add stop at playhead (00:13.000)' }).click();
     const form = page.locator('form', { has: page.getByRole('heading', { name: 'New stop from the playhead' }) });
@@ -238,6 +264,7 @@ describe('an author captions a tour and marks its stops', () => {
     // Stop for Yuki-hotaru from cue 2: from its start to where the next stop begins.
     await tab(page, 'Cues');
     await page.getByRole('button', { name: /^Cue 2, go to/ }).click();
+    await playheadAt('00:04.500');
     await tab(page, 'Stops');
     await page.getByRole('button', { name: 'Add stop from this cue (00:04.500)' }).click();
     const second = page.locator('form', { has: page.getByRole('heading', { name: 'New stop from the selected cue' }) });
@@ -358,5 +385,9 @@ describe('an author captions a tour and marks its stops', () => {
     await page.goto(`${base}/tours/${await other()}/captions`);
     await page.getByRole('heading', { level: 1, name: 'You cannot edit these captions' }).waitFor();
     await shot(page, SUITE, '13-not-editor');
+  });
+
+  it('ran the whole journey without an uncaught error in the page', () => {
+    expect(pageErrors).toEqual([]);
   });
 });

@@ -147,6 +147,11 @@ describe('a viewer searches a misspelt name and jumps to the tree', () => {
     expect(await page.title()).toContain(ACCEPTED_EPITHET);
     expect(await page.locator('meta[property="og:title"]').getAttribute('content')).toContain(ACCEPTED_EPITHET);
     expect(await page.locator('meta[name="description"]').getAttribute('content')).toMatch(/garden tour/);
+    // The frame at that moment is on screen (the seek has finished), not the cover picture.
+    await eventually(() => page.evaluate(() => {
+      const v = document.querySelector('video');
+      return !!v && !v.seeking && v.readyState >= 2;
+    }), 30_000).toBe(true);
     await shot(page, SUITE, '02-opened-at-moment');
   });
 

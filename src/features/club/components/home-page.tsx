@@ -1,5 +1,4 @@
 import { Link } from 'react-router';
-import { Badge } from '@/components/badge';
 import { buttonClasses } from '@/components/button';
 import { EmptyState } from '@/components/empty-state';
 import { ErrorState } from '@/components/error-state';
@@ -13,18 +12,24 @@ import { TrailSketch } from './trail-sketch';
 const plans = [
   {
     title: 'Walks with tree cards',
+    to: '/tours',
+    action: 'Watch the tours',
     text:
       'Members film a slow walk through their garden. As each tree comes into view, its card appears beside the video: ' +
       'accepted name, cultivar Group, leaf shape, seasonal colour, size and hardiness.',
   },
   {
     title: 'Find a named tree',
+    to: '/search',
+    action: 'Search every walk',
     text:
       'Search for a name, even half-remembered or misspelt, or for a feature such as coral bark. You get every moment, ' +
       'in every walk, where that tree appears, and the video starts right there.',
   },
   {
     title: 'Learn the names',
+    to: '/glossary',
+    action: 'Open the glossary',
     text:
       'An A–Z of accepted names with a guide to saying each one, and look-alike cultivars set side by side with ' +
       'their differences first.',
@@ -64,7 +69,7 @@ export interface HomePageProps {
   publishedTours?: number;
 }
 
-/** The front door: what Grovewalk is for, the club the site serves, and what is on the way. */
+/** The front door: what Grovewalk is for, the club the site serves, and the three ways in. */
 export function HomePage({ publishedTours }: HomePageProps) {
   const walksOpen = (publishedTours ?? 0) > 0;
   useDocumentTitle('');
@@ -89,32 +94,21 @@ export function HomePage({ publishedTours }: HomePageProps) {
         <h2 id="what-heading" className="text-2xl text-moss-deep sm:text-3xl">
           What Grovewalk does
         </h2>
-        <p className="mt-2 max-w-prose text-ink-soft">These parts are being built now and will open on this site one by one.</p>
+        <p className="mt-2 max-w-prose text-ink-soft">Three ways in, whichever you came for.</p>
         <ul className="mt-6 grid gap-5 md:grid-cols-3">
-          {plans.map((plan, i) => {
-            // The walks themselves can be watched once one is published; their tree cards are still to come.
-            const open = i === 0 && walksOpen;
-            return (
-              <li key={plan.title} className="rounded-lg border border-rule bg-card p-5 shadow-leaf">
-                <div className="flex items-center justify-between gap-2">
-                  <span aria-hidden="true" className="grid size-9 place-items-center rounded-full bg-moss-wash font-bold text-moss-deep">
-                    {i + 1}
-                  </span>
-                  {open ? <Badge tone="moss">Walks open, cards coming</Badge> : <Badge tone="bark">In preparation</Badge>}
-                </div>
-                <h3 className="mt-4 text-lg">{plan.title}</h3>
-                <p className="mt-2 text-ink-soft">{plan.text}</p>
-                {open && (
-                  <>
-                    <p className="mt-2 text-ink-soft">The filmed walks can be watched now; the tree cards beside them are being built.</p>
-                    <Link to="/tours" className={buttonClasses('secondary', 'sm', 'mt-4')}>
-                      Watch the tours ({publishedTours})
-                    </Link>
-                  </>
-                )}
-              </li>
-            );
-          })}
+          {plans.map((plan, i) => (
+            <li key={plan.title} className="flex flex-col rounded-lg border border-rule bg-card p-5 shadow-leaf">
+              <span aria-hidden="true" className="grid size-9 place-items-center rounded-full bg-moss-wash font-bold text-moss-deep">
+                {i + 1}
+              </span>
+              <h3 className="mt-4 text-lg">{plan.title}</h3>
+              <p className="mt-2 text-ink-soft">{plan.text}</p>
+              <Link to={plan.to} className={buttonClasses('secondary', 'sm', 'mt-auto self-start pt-2')}>
+                {plan.action}
+                {i === 0 && walksOpen ? ` (${publishedTours})` : ''}
+              </Link>
+            </li>
+          ))}
         </ul>
       </section>
     </div>

@@ -51,7 +51,7 @@ export function StopForm({ heading, initial, durationMs, playheadMs, submitLabel
       <h3 id={`${id}-h`} className="font-bold">
         {heading}
       </h3>
-      <div className="flex flex-wrap items-end gap-x-4 gap-y-3">
+      <div className="flex flex-wrap items-start gap-x-4 gap-y-3">
         <div>
           <TimeField label="Starts at" valueMs={fields.startMs} durationMs={durationMs} onCommit={(startMs) => set({ startMs })} error={serverFields.startMs} />
           <Button size="sm" variant="quiet" className="mt-1" onClick={() => set({ startMs: playheadMs })}>
