@@ -84,7 +84,13 @@ describe('tree finder', () => {
 
 describe('look-alikes and side by side', () => {
   it('finds the green twin as the nearest look-alike of the red lace-leaf', async () => {
+    // A sparse record agreeing on its only two traits is not offered as a look-alike (invented name).
+    await server.dataSource.getRepository(Cultivar).save({
+      slug: 'sparse-test-record', genus: 'Acer', species: 'palmatum', epithet: 'Sparse Record', acceptedName: "Acer palmatum 'Sparse Record'",
+      status: 'approved', notesHtml: '', fictional: true, traits: { leafForm: 'dissectum', colours: { autumn: ['scarlet'] } },
+    });
     const r = await viewer.get(`/api/lookalikes/${ids['Sora-no-hane']}`);
+    expect(r.body.items.map((i: { cultivar: { epithet: string } }) => i.cultivar.epithet)).not.toContain('Sparse Record');
     expect(r.status).toBe(200);
     expect(r.body.items[0].cultivar.epithet).toBe('Mizu-kagari');
     expect(r.body.items.map((i: { distance: number }) => i.distance)).toEqual([...r.body.items.map((i: { distance: number }) => i.distance)].sort((a, b) => a - b));

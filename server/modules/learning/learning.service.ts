@@ -30,6 +30,11 @@ export interface Moment {
 }
 
 const MOMENTS_PER_RECORD = 3;
+/**
+ * A look-alike must be compared on at least this many traits: two sparse records that agree on
+ * the one or two traits they both give are not look-alikes, just under-described (product rule).
+ */
+export const LOOKALIKE_MIN_SHARED = 4;
 const LEARN_TOKEN_TTL_MS = 2 * 3600_000;
 
 /** The tree finder, look-alikes, side by side, pair notes and learn mode. */
@@ -124,7 +129,7 @@ export class LearningService {
     const record = await this.approvedByIdOrSlug(idOrSlug);
     const others = (await this.approved()).filter((c) => c.id !== record.id && c.traits);
     if (!record.traits || Object.keys(record.traits).length === 0) return { cultivar: presentCultivarSummary(record), items: [] };
-    const near = nearestLookalikes(LearningService.finderRecord(record), others.map(LearningService.finderRecord), k);
+    const near = nearestLookalikes(LearningService.finderRecord(record), others.map(LearningService.finderRecord), k, { minShared: LOOKALIKE_MIN_SHARED });
     const byId = new Map(others.map((c) => [String(c.id), c]));
     return {
       cultivar: presentCultivarSummary(record),
