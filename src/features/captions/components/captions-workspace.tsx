@@ -211,6 +211,7 @@ function EditorSession({ tour, track, detail, onUnsaved, onReload, openPanel, re
   const [onlyIssues, setOnlyIssues] = useState(false);
   const [follow, setFollow] = useState(true);
   const listRef = useRef<HTMLDivElement | null>(null);
+  const pressedAt = useRef(0);
   const helpRef = useRef<HTMLDetailsElement | null>(null);
   const rootRef = useRef<HTMLDivElement | null>(null);
   const textareas = useRef(new Map<string, HTMLTextAreaElement>());
@@ -252,13 +253,15 @@ function EditorSession({ tour, track, detail, onUnsaved, onReload, openPanel, re
     select(currentKey);
   }, [currentKey, follow, playhead.playing, select]);
 
-  // The selected cue scrolls into view inside the list (not the page), gently unless motion is reduced.
+  // The selected cue scrolls into view inside the list (not the page), gently unless motion is
+  // reduced; not when it was just clicked, since moving the row under the pointer would turn the
+  // press and the release into a click on something else.
   useEffect(() => {
     const box = listRef.current;
     const key = editor.selected;
     if (!box || !key) return;
     const row = box.querySelector<HTMLElement>(`li[data-cue-key="${CSS.escape(key)}"]`);
-    if (row) {
+    if (row && performance.now() - pressedAt.current > 600) {
       const top = row.offsetTop;
       const bottom = top + row.offsetHeight;
       if (top < box.scrollTop || bottom > box.scrollTop + box.clientHeight) {
@@ -448,6 +451,7 @@ function EditorSession({ tour, track, detail, onUnsaved, onReload, openPanel, re
               onTime={onTime}
               registerText={registerText}
               listRef={listRef}
+              pressedAt={pressedAt}
               helpRef={helpRef}
               empty={empty}
               editable={editable}

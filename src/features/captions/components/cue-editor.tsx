@@ -30,6 +30,8 @@ export interface CueEditorProps {
   onTime: (key: string, edge: 'start' | 'end', ms: number) => void;
   registerText: (key: string, el: HTMLTextAreaElement | null) => void;
   listRef: RefObject<HTMLDivElement | null>;
+  /** When the pointer last went down in the list, so a selection made by clicking does not scroll the list under it. */
+  pressedAt: RefObject<number>;
   helpRef: RefObject<HTMLDetailsElement | null>;
   /** Shown instead of the list when the track has no cues. */
   empty: ReactNode;
@@ -100,7 +102,13 @@ export function CueEditor(props: CueEditorProps) {
           Redo
         </Tool>
       </div>
-      <div ref={listRef} className="relative max-h-[72vh] min-h-48 overflow-y-auto rounded-md border border-rule bg-paper p-2">
+      <div
+        ref={listRef}
+        onPointerDown={() => {
+          props.pressedAt.current = performance.now();
+        }}
+        className="relative max-h-[72vh] min-h-48 overflow-y-auto rounded-md border border-rule bg-paper p-2"
+      >
         {cues.length === 0 ? (
           props.empty
         ) : shown.length === 0 ? (

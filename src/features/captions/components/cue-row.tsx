@@ -96,7 +96,7 @@ export const CueRow = memo(function CueRow({ cue, number, selected, current, iss
         placeholder="Type what is said…"
         className="mt-1.5 block w-full resize-y rounded-md border border-edge bg-card px-2 py-1.5 text-base leading-snug"
       />
-      <QualityBadges issues={issues} detailed={selected} id={idBase} />
+      <QualityBadges issues={issues} id={idBase} cueNumber={number} />
     </li>
   );
 });

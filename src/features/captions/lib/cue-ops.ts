@@ -116,13 +116,6 @@ export function setEdge(cues: readonly EditorCue[], key: string, edge: 'start' |
   return { cues: replaceAt(cues, index, changed), selected: key };
 }
 
-/** Both times at once, from the cue's two time fields. */
-export function setTimes(cues: readonly EditorCue[], key: string, startMs: number, endMs: number): CueEdit {
-  const index = indexOfKey(cues, key);
-  if (index < 0) return { cues: cues.slice(), selected: key };
-  return { cues: replaceAt(cues, index, { ...cues[index]!, startMs: Math.max(0, startMs), endMs: Math.max(0, endMs) }), selected: key };
-}
-
 /** Moves one edge by `deltaMs` (± NUDGE_MS from the keyboard); never before 0 or past the end. */
 export function nudgeEdge(cues: readonly EditorCue[], key: string, edge: 'start' | 'end', deltaMs: number, durationMs: number | null = null): CueEdit {
   const cue = cues[indexOfKey(cues, key)];
