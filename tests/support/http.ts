@@ -30,11 +30,24 @@ export class Agent {
     }
   }
 
-  /** Fetches a fresh CSRF token for the current session. */
-  async refreshCsrf(): Promise<string> {
-    const res = await this.raw('GET', '/api/auth/csrf');
-    this.csrf = ((await res.json()) as { token: string }).token;
-    return this.csrf;
+  private csrfPending: Promise<string> | null = null;
+
+  /**
+   * Fetches a fresh CSRF token for the current session. Concurrent callers share one request, as
+   * the browser client does: parallel fetches would each store a new token in the session and all
+   * but the last would be refused.
+   */
+  refreshCsrf(): Promise<string> {
+    this.csrfPending ??= (async () => {
+      try {
+        const res = await this.raw('GET', '/api/auth/csrf');
+        this.csrf = ((await res.json()) as { token: string }).token;
+        return this.csrf;
+      } finally {
+        this.csrfPending = null;
+      }
+    })();
+    return this.csrfPending;
   }
 
   async raw(method: string, url: string, opts: { body?: unknown; rawBody?: string | Buffer; headers?: Record<string, string>; csrf?: boolean | string } = {}): Promise<Response> {
