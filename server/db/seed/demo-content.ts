@@ -134,7 +134,7 @@ export async function seedDemoContent(dataSource: DataSource, storage: MediaStor
       let t = INTRO_SEC * 1000;
       let seq = 0;
       const keyframes: number[] = [];
-      for (const [i, stop] of demo.stops.entries()) {
+      for (const stop of demo.stops) {
         const start = t;
         const end = t + stop.seconds * 1000;
         keyframes.push(start / 1000);
@@ -151,7 +151,7 @@ export async function seedDemoContent(dataSource: DataSource, storage: MediaStor
           });
         }
         const cultivar = stop.cultivar ? byKey.get(stop.cultivar)! : null;
-        await m.getRepository(Stop).insert({ tourId: tour.id, startMs: start, endMs: end, title: cultivar ? cultivar.epithet : `Unlabelled tree ${i + 1}`, cultivarId: cultivar?.id ?? null });
+        await m.getRepository(Stop).insert({ tourId: tour.id, startMs: start, endMs: end, title: cultivar ? cultivar.epithet : 'Tree that lost its label', cultivarId: cultivar?.id ?? null });
         t = end;
       }
       await queue.enqueue(
