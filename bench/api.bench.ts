@@ -10,32 +10,17 @@
  * Self-contained: starts a private MariaDB under .data/bench (port 3409 unless --port or
  * BENCH_DB_PORT says otherwise), a fresh database with an invented corpus, and the app in process.
  */
-import 'reflect-metadata';
 import autocannon from 'autocannon';
 import express from 'express';
 import http from 'node:http';
 import type { AddressInfo } from 'node:net';
 import os from 'node:os';
-import path from 'node:path';
-import { createApp } from '../server/app';
-import { loadConfig, ROOT } from '../server/config';
-import { stopMariaDb } from '../server/infra/mariadb';
-import { prepareDatabase } from '../server/infra/prepare';
 import { countQueries } from '../tests/support/query-counter';
 import { buildCorpus } from './bench-corpus';
+import { benchArg, percentile, startBench } from './support';
 
-const argv = process.argv.slice(2);
-const arg = (name: string) => {
-  const i = argv.indexOf(`--${name}`);
-  return i >= 0 ? argv[i + 1] : undefined;
-};
-const DURATION = Number(arg('seconds')) || 10;
-const PORT = arg('port') ?? process.env.BENCH_DB_PORT ?? '3409';
+const DURATION = Number(benchArg('seconds')) || 10;
 const CONNECTIONS = 100;
-
-function percentile(sorted: readonly number[], p: number): number {
-  return sorted[Math.min(sorted.length - 1, Math.max(0, Math.ceil((p / 100) * sorted.length) - 1))] ?? NaN;
-}
 
 let served = 0;
 
@@ -90,19 +75,9 @@ async function hammer(url: string): Promise<Run> {
   };
 }
 
-const config = loadConfig({
-  ...process.env,
-  NODE_ENV: 'test',
-  DATA_DIR: path.join(ROOT, '.data', 'bench'),
-  DB_PORT: PORT,
-  DB_NAME: 'grovewalk_bench',
-  DB_USER: 'grovewalk_bench',
-  MEDIA_DIR: path.join(ROOT, '.data', 'bench', 'media'),
-  BCRYPT_COST: '4',
-});
-const db = await prepareDatabase(config, { fresh: true });
+const bench = await startBench();
 try {
-  const ds = db.dataSource;
+  const ds = bench.dataSource;
   // A modest invented corpus: the watch endpoint reads one tour, so the total size matters little.
   const corpus = await buildCorpus(ds, { recordCount: 500, cueCount: 20_000, publishedTours: 100, draftTours: 4 });
   const tourId = corpus.tourIds[0]!;
@@ -110,7 +85,7 @@ try {
   const [{ n: stopCount }] = await ds.query('SELECT COUNT(*) AS n FROM stops WHERE tour_id = ?', [tourId]);
 
   const loadBefore = os.loadavg()[0]!;
-  const handle = createApp({ config, dataSource: ds, mailer: { send: async () => undefined, close: () => undefined }, log: () => undefined });
+  const handle = bench.createApp();
   const appServer = await listen(handle.app);
   const bare = express();
   bare.disable('x-powered-by');
@@ -148,6 +123,5 @@ try {
   // Other work on the machine slows every figure; say how busy it was.
   console.log(`  machine: ${os.cpus().length} cores, 1-minute load average ${loadBefore.toFixed(1)} before the runs, ${os.loadavg()[0]!.toFixed(1)} after (this benchmark adds about 1–2)`);
 } finally {
-  await db.close();
-  if (db.mariadb) await stopMariaDb(db.mariadb);
+  await bench.close();
 }

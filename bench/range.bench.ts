@@ -2,41 +2,36 @@
  * Range-serving benchmark: 50 concurrent HTTP Range requests against one rendition through the
  * real media route (visibility check included), on loopback. Prints figures; asserts nothing.
  *
- *   npm run bench range [-- --seconds 10]
+ *   npm run bench range [-- --seconds 10] [-- --port 3409]
  *
- * Self-contained: starts a private MariaDB under .data/bench (port 3409), a fresh database, and an
- * in-process app; the rendition is a generated clip (never downloaded media).
+ * Self-contained: starts a private MariaDB under .data/bench (port 3409 unless --port or
+ * BENCH_DB_PORT says otherwise), a fresh database, and an in-process app; the rendition is a
+ * generated clip (never downloaded media).
  */
-import 'reflect-metadata';
 import autocannon from 'autocannon';
 import http from 'node:http';
 import type { AddressInfo } from 'node:net';
 import { mkdir, stat } from 'node:fs/promises';
 import path from 'node:path';
-import { createApp } from '../server/app';
-import { loadConfig, ROOT } from '../server/config';
 import { Tour } from '../server/db/entities/tour.entity';
 import { User } from '../server/db/entities/user.entity';
-import { stopMariaDb } from '../server/infra/mariadb';
-import { prepareDatabase } from '../server/infra/prepare';
 import { MediaStorage } from '../server/media/storage';
 import { generateClip } from '../tests/support/make-clip';
+import { benchArg, startBench } from './support';
 
-const argv = process.argv.slice(2);
-const secondsAt = argv.indexOf('--seconds');
-const DURATION = secondsAt >= 0 ? Number(argv[secondsAt + 1]) || 10 : 10;
+const DURATION = Number(benchArg('seconds')) || 10;
 const CONNECTIONS = 50;
 
-const config = loadConfig({ ...process.env, NODE_ENV: 'test', DATA_DIR: path.join(ROOT, '.data', 'bench'), DB_PORT: '3409', DB_NAME: 'grovewalk_bench', DB_USER: 'grovewalk_bench', MEDIA_DIR: path.join(ROOT, '.data', 'bench', 'media'), BCRYPT_COST: '4' });
-const db = await prepareDatabase(config, { fresh: true });
+const bench = await startBench();
+const { config, dataSource } = bench;
 try {
   const storage = new MediaStorage(config.mediaDir);
   const dir = path.join(config.mediaDir, 'renditions', '1', 'j1');
   await mkdir(dir, { recursive: true });
   const file = await generateClip(path.join(dir, 'rendition-720p.mp4'), { seconds: 20, width: 1280, height: 720, audio: true });
   const { size } = await stat(file);
-  const user = await db.dataSource.getRepository(User).save({ email: 'bench@bench.example', displayName: 'Bench (invented)', passwordHash: 'x', role: 'author' });
-  const tour = await db.dataSource.getRepository(Tour).save({
+  const user = await dataSource.getRepository(User).save({ email: 'bench@bench.example', displayName: 'Bench (invented)', passwordHash: 'x', role: 'author' });
+  const tour = await dataSource.getRepository(Tour).save({
     authorId: user.id,
     title: 'Bench tour (invented)',
     descriptionHtml: '',
@@ -45,7 +40,7 @@ try {
     mediaDir: storage.relative(dir),
     renditions: [{ height: 720, width: 1280, file: 'rendition-720p.mp4', bytes: size, videoBitrate: null, copied: false }],
   });
-  const handle = createApp({ config, dataSource: db.dataSource, mailer: { send: async () => undefined, close: () => undefined }, log: () => undefined });
+  const handle = bench.createApp();
   const server = http.createServer(handle.app);
   await new Promise<void>((r) => server.listen(0, '127.0.0.1', () => r()));
   const url = `http://127.0.0.1:${(server.address() as AddressInfo).port}/media/tours/${tour.id}/rendition-720p.mp4`;
@@ -77,6 +72,5 @@ try {
   console.log(`  latency: p50 ${result.latency.p50} ms, p97.5 ${result.latency.p97_5} ms, p99 ${result.latency.p99} ms (autocannon reports p97.5, not p95)`);
   console.log(`  throughput: ${(result.throughput.average / 1e6).toFixed(1)} MB/s; 2xx ${ok206}, non-2xx ${result.non2xx}, errors ${result.errors}`);
 } finally {
-  await db.close();
-  if (db.mariadb) await stopMariaDb(db.mariadb);
+  await bench.close();
 }

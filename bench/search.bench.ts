@@ -9,32 +9,18 @@
  * Self-contained: starts a private MariaDB under .data/bench (port 3409 unless --port or
  * BENCH_DB_PORT says otherwise), a fresh database, and the search service in this process.
  */
-import 'reflect-metadata';
 import os from 'node:os';
-import path from 'node:path';
 import { performance } from 'node:perf_hooks';
-import { loadConfig, ROOT } from '../server/config';
-import { stopMariaDb } from '../server/infra/mariadb';
-import { prepareDatabase } from '../server/infra/prepare';
-import { INNODB_DEFAULT_STOPWORDS, likeContains } from '../server/modules/search/fulltext';
+import { likeContains } from '../server/db/like';
+import { INNODB_DEFAULT_STOPWORDS } from '../server/modules/search/fulltext';
 import { SearchService } from '../server/modules/search/search.service';
 import { searchWords } from '../shared/search/text-fold';
 import { buildCorpus, CUE_WORDS, misspell, prng, SHORT_WORDS } from './bench-corpus';
+import { benchArg, percentile, startBench } from './support';
 
-const argv = process.argv.slice(2);
-const arg = (name: string) => {
-  const i = argv.indexOf(`--${name}`);
-  return i >= 0 ? argv[i + 1] : undefined;
-};
-const QUERIES = Number(arg('queries')) || 200;
-const PORT = arg('port') ?? process.env.BENCH_DB_PORT ?? '3409';
+const QUERIES = Number(benchArg('queries')) || 200;
 const CUES = 100_000;
 const RECORDS = 2000;
-
-function percentile(sorted: readonly number[], p: number): number {
-  if (!sorted.length) return NaN;
-  return sorted[Math.min(sorted.length - 1, Math.max(0, Math.ceil((p / 100) * sorted.length) - 1))]!;
-}
 
 interface Stats {
   p50: number;
@@ -58,19 +44,9 @@ async function time<T>(inputs: readonly T[], fn: (x: T) => Promise<unknown>, war
 const f = (x: number) => x.toFixed(2).padStart(8);
 const row = (label: string, s: Stats, extra = '') => console.log(`  ${label.padEnd(34)} p50 ${f(s.p50)} ms   p95 ${f(s.p95)} ms   mean ${f(s.mean)} ms   n ${s.n}${extra}`);
 
-const config = loadConfig({
-  ...process.env,
-  NODE_ENV: 'test',
-  DATA_DIR: path.join(ROOT, '.data', 'bench'),
-  DB_PORT: PORT,
-  DB_NAME: 'grovewalk_bench',
-  DB_USER: 'grovewalk_bench',
-  MEDIA_DIR: path.join(ROOT, '.data', 'bench', 'media'),
-  BCRYPT_COST: '4',
-});
-const db = await prepareDatabase(config, { fresh: true });
+const bench = await startBench();
 try {
-  const ds = db.dataSource;
+  const ds = bench.dataSource;
   const t0 = performance.now();
   const corpus = await buildCorpus(ds, { recordCount: RECORDS, cueCount: CUES, publishedTours: 480, draftTours: 40 });
   console.log(
@@ -142,6 +118,5 @@ try {
   // Other work on the machine slows every figure; say how busy it was.
   console.log(`  machine: ${os.cpus().length} cores, 1-minute load average ${loadBefore.toFixed(1)} before the runs, ${os.loadavg()[0]!.toFixed(1)} after (this benchmark adds about 1–2)`);
 } finally {
-  await db.close();
-  if (db.mariadb) await stopMariaDb(db.mariadb);
+  await bench.close();
 }

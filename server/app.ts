@@ -12,17 +12,19 @@ import { HttpError } from './errors/http-error';
 import type { Mailer } from './mail/mailer';
 import { authenticate } from './middleware/auth';
 import { adminRouter } from './modules/admin/admin.router';
+import { OutboxService } from './modules/admin/outbox.service';
 import { UsersService } from './modules/admin/users.service';
 import { AuthService } from './modules/auth/auth.service';
 import { authRouter } from './modules/auth/auth.router';
 import { clubRouter } from './modules/club/club.router';
+import { ClubService } from './modules/club/club.service';
 import { learningRouter } from './modules/learning/learning.router';
 import { LearningService } from './modules/learning/learning.service';
 import { MediaStorage } from './media/storage';
 import { mediaRouter } from './modules/tours/media.router';
 import { tourRouter } from './modules/tours/tour.router';
 import { TourService } from './modules/tours/tour.service';
-import { captionRouter } from './modules/captions/caption.router';
+import { captionRouter, TRACK_BODY_LIMIT, TRACK_BODY_PATHS } from './modules/captions/caption.router';
 import { CaptionService } from './modules/captions/caption.service';
 import { cultivarRouter } from './modules/cultivars/cultivar.router';
 import { cultivarMediaRouter, cultivarPhotoRouter } from './modules/cultivars/cultivar-photo.router';
@@ -112,8 +114,10 @@ export function createApp(deps: AppDeps): AppHandle {
       cookie: { httpOnly: true, sameSite: 'lax', secure: config.COOKIE_SECURE, maxAge: 30 * 24 * 3600_000 },
   });
   const api = express.Router();
-  // Large enough for a whole caption track (CUES_MAX cues) in one autosave.
-  api.use(express.json({ limit: '8mb' }));
+  // A whole caption track (import, autosave) is read with its own larger limit first; the general
+  // parser then skips a body already read, so every other route keeps 1 MB.
+  api.use(TRACK_BODY_PATHS, express.json({ limit: TRACK_BODY_LIMIT }));
+  api.use(express.json({ limit: '1mb' }));
   api.use(sessionMw);
   const { csrfSynchronisedProtection, generateToken } = csrfSync({
     getTokenFromRequest: (req: Request) => req.get('x-csrf-token'),
@@ -129,7 +133,7 @@ export function createApp(deps: AppDeps): AppHandle {
   const auth = new AuthService({ dataSource, mailer: deps.mailer, publicUrl: config.publicUrl, bcryptCost: config.BCRYPT_COST, log });
   api.get('/health', (_req, res) => res.json({ ok: true }));
   api.use(authRouter(auth, { signInLimit: config.SIGN_IN_LIMIT, csrfToken: (req) => generateToken(req) }));
-  api.use(clubRouter(dataSource));
+  api.use(clubRouter(new ClubService(dataSource)));
   const storage = new MediaStorage(config.mediaDir);
   const tours = new TourService(dataSource, storage, deps.onJobEnqueued);
   api.use('/tours', tourRouter(tours, storage, config.UPLOAD_LIMIT_BYTES));
@@ -146,7 +150,7 @@ export function createApp(deps: AppDeps): AppHandle {
   api.use(glossaryRouter(new GlossaryService(dataSource, cultivars)));
   api.use(spellingFixRouter(new SpellingFixService({ dataSource, mailer: deps.mailer, publicUrl: config.publicUrl, log }), new NameDetection(dataSource, cultivars)));
   api.use(learningRouter(new LearningService(dataSource, config.sessionSecret)));
-  api.use('/admin', adminRouter(new UsersService(dataSource), dataSource));
+  api.use('/admin', adminRouter(new UsersService(dataSource), new OutboxService(dataSource)));
   api.use(apiNotFound);
 
   app.use('/api', api);

@@ -1,5 +1,8 @@
 import type { RequestHandler } from 'express';
-import type { z } from 'zod';
+import { z } from 'zod';
+
+/** A numeric id in a path (`/tours/:id`): a whole number from 1; anything else is a 400 through the zod error mapping. */
+export const idParam = z.coerce.number().int().min(1);
 
 /** Parses req.body with the shared schema; the parsed value replaces the body. */
 export function validateBody<S extends z.ZodTypeAny>(schema: S): RequestHandler {

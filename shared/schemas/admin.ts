@@ -42,3 +42,4 @@ export type OutboxMessage = z.infer<typeof outboxMessageSchema>;
 export const outboxPage = pageOf(outboxMessageSchema);
 export type OutboxPage = z.infer<typeof outboxPage>;
 export const outboxQuery = pageQuerySchema.extend({ to: z.string().trim().max(254).optional() });
+export type OutboxQuery = z.infer<typeof outboxQuery>;

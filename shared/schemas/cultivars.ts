@@ -35,7 +35,6 @@ export const cultivarSummarySchema = z.object({
   fictional: z.boolean(),
 });
 export type CultivarSummary = z.infer<typeof cultivarSummarySchema>;
-export const cultivarPage = pageOf(cultivarSummarySchema);
 
 export const listCultivarsQuery = pageQuerySchema.extend({
   q: z.string().trim().max(100).default(''),

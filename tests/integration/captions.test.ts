@@ -370,6 +370,22 @@ describe('autosave and the version check', () => {
     expect(detail.body.cues).toHaveLength(winner.body.track.cueCount);
     expect(new Set(detail.body.cues.map((c: { text: string }) => c.text)).size).toBe(1);
   });
+
+  it('takes a whole track over 1 MB in one save, while an ordinary route refuses a JSON body over 1 MB with 413', async () => {
+    const tour = await tourOf();
+    const t = await author.post(`/api/tours/${tour.id}/tracks`, { lang: 'en', label: 'English' });
+    const id = t.body.track.id;
+    const cues = Array.from({ length: 1200 }, (_, k) => ({ startMs: k * 2000, endMs: k * 2000 + 1500, text: `Cue ${k} by the fern bed. ${'x'.repeat(900)}` }));
+    expect(JSON.stringify({ version: 1, cues }).length).toBeGreaterThan(1024 * 1024);
+    const saved = await author.call('PUT', `/api/tracks/${id}/cues`, { version: 1, cues });
+    expect(saved.status).toBe(200);
+    expect(saved.body.track).toMatchObject({ version: 2, cueCount: 1200 });
+
+    const rename = await author.patch(`/api/tracks/${id}`, { label: 'y'.repeat(1024 * 1024 + 1) });
+    expect(rename.status).toBe(413);
+    expect(rename.body.error.code).toBe('too_large');
+    expect((await author.get(`/api/tracks/${id}`)).body.track.label).toBe('English');
+  });
 });
 
 describe('who may see and edit captions', () => {

@@ -1,12 +1,10 @@
 import { Brackets, IsNull, type DataSource } from 'typeorm';
 import type { ListUsersQuery, UpdateUserInput } from '../../../shared/schemas/admin';
 import { User } from '../../db/entities/user.entity';
+import { likeContains } from '../../db/like';
 import { BadRequest, Conflict, NotFound } from '../../errors/http-error';
 
 const SORT_COLUMNS = { displayName: 'u.displayName', email: 'u.email', role: 'u.role', createdAt: 'u.createdAt' } as const;
-
-/** Escapes LIKE wildcards so a search for "50%" means the text "50%". */
-export const likeEscape = (s: string) => s.replace(/[\\%_]/g, (c) => `\\${c}`);
 
 /** The admin's view of accounts: search, sort, page, change roles, disable. */
 export class UsersService {
@@ -15,7 +13,7 @@ export class UsersService {
   async list(q: ListUsersQuery) {
     const qb = this.dataSource.getRepository(User).createQueryBuilder('u');
     if (q.q) {
-      const like = `%${likeEscape(q.q)}%`;
+      const like = likeContains(q.q);
       qb.andWhere(new Brackets((w) => w.where('u.displayName LIKE :like', { like }).orWhere('u.email LIKE :like', { like })));
     }
     if (q.role) qb.andWhere('u.role = :role', { role: q.role });

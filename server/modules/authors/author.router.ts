@@ -1,11 +1,8 @@
 import { Router } from 'express';
-import { z } from 'zod';
 import { pageQuerySchema } from '../../../shared/schemas/common';
-import { parsedQuery, validateQuery } from '../../middleware/validate';
+import { idParam, parsedQuery, validateQuery } from '../../middleware/validate';
 import { presentTour } from '../tours/tour.presenter';
 import type { AuthorService } from './author.service';
-
-const idParam = z.coerce.number().int().min(1);
 
 /** GET /api/authors/:id: display name, garden, published tour count and a page of their published tours. */
 export function authorRouter(authors: AuthorService): Router {

@@ -1,15 +1,21 @@
 import { Router, type RequestHandler, type Response } from 'express';
 import multer, { MulterError } from 'multer';
-import { z } from 'zod';
 import { CAPTION_FILE_MAX_BYTES, createTrackInput, importTrackInput, saveCuesInput, trackLangQuery, updateTrackInput } from '../../../shared/schemas/captions';
 import { BadRequest, HttpError } from '../../errors/http-error';
 import { requireRole } from '../../middleware/auth';
-import { parsedQuery, validateBody, validateQuery } from '../../middleware/validate';
+import { idParam, parsedQuery, validateBody, validateQuery } from '../../middleware/validate';
 import type { TourService } from '../tours/tour.service';
 import { presentTrack } from './caption.presenter';
 import type { CaptionService, ExportFile } from './caption.service';
 
-const idParam = z.coerce.number().int().min(1);
+const IMPORT_PATH = '/tours/:id/tracks/import';
+const CUES_PATH = '/tracks/:trackId/cues';
+/**
+ * The two routes whose JSON body is a whole caption track (import, cue autosave): up to CUES_MAX
+ * cues, so they get TRACK_BODY_LIMIT; every other JSON body keeps the app's smaller limit.
+ */
+export const TRACK_BODY_PATHS = [IMPORT_PATH, CUES_PATH];
+export const TRACK_BODY_LIMIT = '8mb';
 
 /** One caption file, kept in memory (it is small), under the shared size limit. */
 function captionUpload(): RequestHandler {
@@ -59,7 +65,7 @@ export function captionRouter(captions: CaptionService, tours: TourService): Rou
     res.json(await captions.preview(idParam.parse(req.params.id), req.user!, req.file.buffer));
   });
 
-  r.post('/tours/:id/tracks/import', requireRole('author'), validateBody(importTrackInput), async (req, res) => {
+  r.post(IMPORT_PATH, requireRole('author'), validateBody(importTrackInput), async (req, res) => {
     const t = await captions.importTrack(idParam.parse(req.params.id), req.user!, req.body);
     res.status(201).json({ track: presentTrack(t.track, t.cueCount) });
   });
@@ -73,7 +79,7 @@ export function captionRouter(captions: CaptionService, tours: TourService): Rou
     res.set('Cache-Control', 'no-store').json({ track: presentTrack(d.track.track, d.track.cueCount), cues: d.cues, quality: d.quality });
   });
 
-  r.put('/tracks/:trackId/cues', requireRole('author'), validateBody(saveCuesInput), async (req, res) => {
+  r.put(CUES_PATH, requireRole('author'), validateBody(saveCuesInput), async (req, res) => {
     const t = await captions.saveCues(idParam.parse(req.params.trackId), req.user!, req.body);
     res.json({ track: presentTrack(t.track, t.cueCount) });
   });

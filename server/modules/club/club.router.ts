@@ -1,25 +1,19 @@
 import { Router } from 'express';
-import { IsNull, type DataSource } from 'typeorm';
-import { Club } from '../../db/entities/club.entity';
-import { User } from '../../db/entities/user.entity';
+import type { ClubService } from './club.service';
 
 /** /api/club: the club this site serves and its members (public). */
-export function clubRouter(dataSource: DataSource): Router {
+export function clubRouter(clubs: ClubService): Router {
   const r = Router();
   r.get('/club', async (_req, res) => {
-    const club = await dataSource.getRepository(Club).findOne({ where: {}, order: { id: 'ASC' } });
-    if (!club) return res.json({ club: null });
-    const members = await dataSource.getRepository(User).find({
-      where: { disabledAt: IsNull() },
-      order: { displayName: 'ASC' },
-      take: 200,
-    });
+    const found = await clubs.current();
+    if (!found) return res.json({ club: null });
+    const { club, members } = found;
     res.json({
       club: {
         name: club.name,
         blurb: club.blurb,
         fictional: club.fictional,
-        members: members.filter((m) => m.emailVerifiedAt).map((m) => ({ id: m.id, displayName: m.displayName, role: m.role, garden: m.garden })),
+        members: members.map((m) => ({ id: m.id, displayName: m.displayName, role: m.role, garden: m.garden })),
       },
     });
   });

@@ -1,14 +1,11 @@
 import { Router, type RequestHandler } from 'express';
 import multer from 'multer';
-import { z } from 'zod';
 import { CULTIVAR_PHOTO_MAX_BYTES, cultivarPhotoInput, updateCultivarPhotoInput } from '../../../shared/schemas/cultivars';
 import { NotFound } from '../../errors/http-error';
 import { requireRole } from '../../middleware/auth';
-import { validateBody } from '../../middleware/validate';
+import { idParam, validateBody } from '../../middleware/validate';
 import type { CultivarPhotoService } from './cultivar-photo.service';
 import { presentCultivarPhoto } from './cultivar.presenter';
-
-const idParam = z.coerce.number().int().min(1);
 
 /** One photo per request, kept in memory: sharp reads the buffer and only the resized files reach the disk. */
 const photoUpload: RequestHandler = multer({
@@ -46,7 +43,7 @@ export function cultivarPhotoRouter(photos: CultivarPhotoService): Router {
 export function cultivarMediaRouter(photos: CultivarPhotoService): Router {
   const r = Router();
   r.get('/:id/:file', async (req, res) => {
-    const id = z.coerce.number().int().min(1).safeParse(req.params.id);
+    const id = idParam.safeParse(req.params.id);
     if (!id.success) throw new NotFound('No such photo.');
     const f = await photos.file(id.data, String(req.params.file), req.user);
     await new Promise<void>((resolve, reject) => {

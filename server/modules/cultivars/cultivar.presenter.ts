@@ -13,10 +13,10 @@ import type {
 import type { Cultivar } from '../../db/entities/cultivar.entity';
 import type { CultivarPhoto } from '../../db/entities/cultivar-photo.entity';
 import type { CultivarVariant } from '../../db/entities/cultivar-variant.entity';
-import type { Stop } from '../../db/entities/stop.entity';
-import type { Tour } from '../../db/entities/tour.entity';
 import { sanitizeRichText } from '../tours/sanitize';
-import { mediaUrl } from '../tours/tour.presenter';
+import { posterUrl } from '../tours/tour.presenter';
+import type { PublishedMoment } from '../watch/published-moments';
+import { momentThumbnail } from '../watch/thumbnail.presenter';
 import { CARE_CAUTION, careNoteFor } from './care-note';
 
 /** The record's name fields in the shape the shared name rules take (the Group field is `group` there). */
@@ -83,31 +83,10 @@ export function presentCultivarPhoto(p: CultivarPhoto): CultivarPhotoDto {
   };
 }
 
-/**
- * The scrubbing-preview tile of a tour at `ms`, so a record page can show each tour moment
- * without a picture of its own: sheets are filled left to right, then top to bottom, as
- * makeThumbnailStrip (media/images.ts) writes them with ffmpeg's tile filter.
- */
-export function thumbnailTile(tour: Tour, ms: number): TourMoment['thumbnail'] {
-  const strip = tour.thumbStrip;
-  if (!strip || strip.sheets.length === 0 || !(strip.everySec > 0)) return null;
-  const count = strip.count || strip.sheets.length * strip.columns * strip.rows;
-  const i = Math.min(count - 1, Math.max(0, Math.floor(ms / 1000 / strip.everySec + 1e-9)));
-  const perSheet = strip.columns * strip.rows;
-  const sheet = strip.sheets[Math.floor(i / perSheet)];
-  if (!sheet) return null;
-  const pos = i % perSheet;
-  return {
-    url: mediaUrl(tour, sheet.file),
-    x: (pos % strip.columns) * strip.tileWidth,
-    y: Math.floor(pos / strip.columns) * strip.tileHeight,
-    w: strip.tileWidth,
-    h: strip.tileHeight,
-  };
-}
-
-/** A stop of a published tour as the record page lists it. */
-export function presentTourMoment(stop: Stop, tour: Tour): TourMoment {
+/** A stop of a published tour as the record page lists it: the poster, and the preview tile at the stop's start. */
+export function presentTourMoment(stop: PublishedMoment): TourMoment {
+  const { tour } = stop;
+  const thumb = momentThumbnail(tour, stop.startMs);
   return {
     tourId: tour.id,
     tourTitle: tour.title,
@@ -115,8 +94,8 @@ export function presentTourMoment(stop: Stop, tour: Tour): TourMoment {
     stopTitle: stop.title,
     startMs: stop.startMs,
     endMs: stop.endMs,
-    posterUrl: tour.posterFile ? mediaUrl(tour, tour.posterFile) : null,
-    thumbnail: thumbnailTile(tour, stop.startMs),
+    posterUrl: posterUrl(tour),
+    thumbnail: thumb?.kind === 'tile' ? { url: thumb.url, x: thumb.x, y: thumb.y, w: thumb.w, h: thumb.h } : null,
   };
 }
 
@@ -139,7 +118,7 @@ export interface CultivarFullParts {
   photos: readonly CultivarPhoto[];
   mergedInto: Cultivar | null;
   spokenAt: readonly SpokenMoment[];
-  stops: readonly { stop: Stop; tour: Tour }[];
+  stops: readonly PublishedMoment[];
 }
 
 /** The record in full, as GET /api/cultivars/:idOrSlug returns it. */
@@ -153,7 +132,7 @@ export function presentCultivarFull(parts: CultivarFullParts): CultivarFull {
     mergedInto: parts.mergedInto ? { id: parts.mergedInto.id, slug: parts.mergedInto.slug, acceptedName: parts.mergedInto.acceptedName } : null,
     photos: parts.photos.map(presentCultivarPhoto),
     spokenAt: [...parts.spokenAt],
-    tourMoments: parts.stops.map(({ stop, tour }) => presentTourMoment(stop, tour)),
+    tourMoments: parts.stops.map(presentTourMoment),
     careNote: careNoteFor(c.notesHtml),
     careCaution: CARE_CAUTION,
   };

@@ -3,11 +3,10 @@ import { z } from 'zod';
 import { cultivarIndexQuery, cultivarInput, mergeCultivarInput, updateCultivarInput, variantInput, type MergeCultivarResponse } from '../../../shared/schemas/cultivars';
 import type { User } from '../../db/entities/user.entity';
 import { requireRole } from '../../middleware/auth';
-import { parsedQuery, validateBody, validateQuery } from '../../middleware/validate';
+import { idParam, parsedQuery, validateBody, validateQuery } from '../../middleware/validate';
 import { presentCultivarFull, presentCultivarIndexRow } from './cultivar.presenter';
 import type { CultivarService } from './cultivar.service';
 
-const idParam = z.coerce.number().int().min(1);
 const idOrSlugParam = z.string().trim().min(1).max(160);
 
 /**

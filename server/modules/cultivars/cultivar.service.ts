@@ -9,10 +9,11 @@ import { CultivarPhoto } from '../../db/entities/cultivar-photo.entity';
 import { CultivarVariant } from '../../db/entities/cultivar-variant.entity';
 import { SpellingFix } from '../../db/entities/spelling-fix.entity';
 import { Stop } from '../../db/entities/stop.entity';
-import { Tour } from '../../db/entities/tour.entity';
+import { escapeLike, likeContains } from '../../db/like';
 import type { User } from '../../db/entities/user.entity';
 import { BadRequest, Conflict, NotFound } from '../../errors/http-error';
 import { sanitizeRichText } from '../tours/sanitize';
+import { publishedMoments } from '../watch/published-moments';
 import { namePartsOf, type CultivarFullParts } from './cultivar.presenter';
 import { SpokenNames } from './spoken-names';
 import { firstFreeSlug, slugify } from './slug';
@@ -25,9 +26,14 @@ function orNull(v: string | null | undefined): string | null {
   return t ? t : null;
 }
 
-/** Escapes LIKE wildcards so a search for "50%" or "a_b" means those characters. */
-export function likePattern(q: string): string {
-  return `%${q.replace(/[\\%_]/g, (c) => `\\${c}`)}%`;
+/** The lookup for a record named in a URL: by id when it is all digits, else by slug (any case). */
+export function cultivarByIdOrSlug(idOrSlug: string): { id: number } | { slug: string } {
+  return /^\d+$/.test(idOrSlug) ? { id: Number(idOrSlug) } : { slug: idOrSlug.toLowerCase() };
+}
+
+/** Proposals are seen by their proposer and moderators; approved and retired records by everyone. */
+export function canSeeCultivar(c: Cultivar, viewer: User | undefined): boolean {
+  return c.status !== 'proposed' || hasRole(viewer?.role, 'moderator') || (viewer !== undefined && c.createdById === viewer.id);
 }
 
 const NAME_FIELD_OF: Record<string, string> = { group: 'groupName' };
@@ -64,7 +70,7 @@ export class CultivarService {
       qb.andWhere(new Brackets((w) => w.where("c.status = 'approved'").orWhere('c.createdById = :me', { me: viewer?.id ?? 0 })));
     }
     if (q.q) {
-      const pattern = likePattern(q.q);
+      const pattern = likeContains(q.q);
       qb.andWhere(
         new Brackets((w) =>
           w
@@ -93,15 +99,14 @@ export class CultivarService {
     return { items, total, page: q.page, pageSize: q.pageSize };
   }
 
-  /** Proposals are seen by their proposer and moderators; approved and retired records by everyone. */
+  /** See `canSeeCultivar`. */
   canSee(c: Cultivar, viewer: User | undefined): boolean {
-    return c.status !== 'proposed' || hasRole(viewer?.role, 'moderator') || (viewer !== undefined && c.createdById === viewer.id);
+    return canSeeCultivar(c, viewer);
   }
 
   /** One record by id or slug, with its variants; a proposal only for its proposer and moderators. */
   async get(idOrSlug: string, viewer: User | undefined): Promise<{ cultivar: Cultivar; variants: CultivarVariant[] }> {
-    const where = /^\d+$/.test(idOrSlug) ? { id: Number(idOrSlug) } : { slug: idOrSlug.toLowerCase() };
-    const cultivar = await this.repo().findOneBy(where);
+    const cultivar = await this.repo().findOneBy(cultivarByIdOrSlug(idOrSlug));
     if (!cultivar || !this.canSee(cultivar, viewer)) throw new NotFound('No such cultivar record.');
     const variants = await this.dataSource.getRepository(CultivarVariant).find({ where: { cultivarId: cultivar.id }, order: { text: 'ASC' } });
     return { cultivar, variants };
@@ -117,9 +122,9 @@ export class CultivarService {
       this.photosOf(cultivar, viewer),
       this.mergedTarget(cultivar),
       cultivar.status === 'approved' && !cultivar.mergedIntoId ? this.spoken.of(cultivar.id) : Promise.resolve({ moments: [], cues: 0 }),
-      this.tourStops(cultivar.id),
+      publishedMoments(this.dataSource, [cultivar.id], { order: 'newest' }),
     ]);
-    return { cultivar, variants, photos, mergedInto, spokenAt: spoken.moments, stops };
+    return { cultivar, variants, photos, mergedInto, spokenAt: spoken.moments, stops: stops.moments };
   }
 
   /** Checks the name with the shared rules; 400 with one message per field when it breaks them. */
@@ -153,7 +158,7 @@ export class CultivarService {
     const rows: { slug: string }[] = await this.repo(m)
       .createQueryBuilder('c')
       .select('c.slug', 'slug')
-      .where('c.slug = :base OR c.slug LIKE :like', { base, like: `${base.replace(/[\\%_]/g, (c) => `\\${c}`)}-%` })
+      .where('c.slug = :base OR c.slug LIKE :like', { base, like: `${escapeLike(base)}-%` })
       .getRawMany();
     return firstFreeSlug(base, new Set(rows.map((r) => r.slug)));
   }
@@ -383,21 +388,6 @@ export class CultivarService {
   /** Photos are public once the record is approved; before that (or once retired) only for its proposer and moderators. */
   canSeePhotos(c: Cultivar, viewer: User | undefined): boolean {
     return c.status === 'approved' || hasRole(viewer?.role, 'moderator') || (viewer !== undefined && c.createdById === viewer.id);
-  }
-
-  /** Stops of published tours that show this record, newest tour first, with the tour for pictures. */
-  async tourStops(cultivarId: number): Promise<{ stop: Stop; tour: Tour }[]> {
-    const stops = await this.dataSource
-      .getRepository(Stop)
-      .createQueryBuilder('s')
-      .innerJoinAndSelect('s.tour', 't')
-      .where('s.cultivarId = :cultivarId', { cultivarId })
-      .andWhere("t.state = 'published'")
-      .orderBy('t.publishedAt', 'DESC')
-      .addOrderBy('t.id', 'ASC')
-      .addOrderBy('s.startMs', 'ASC')
-      .getMany();
-    return stops.map((stop) => ({ stop, tour: stop.tour! }));
   }
 
   /** An approved record a stop may link to, or null. */

@@ -15,8 +15,10 @@ import { Tour } from '../../db/entities/tour.entity';
 import type { User } from '../../db/entities/user.entity';
 import { BadRequest, NotFound } from '../../errors/http-error';
 import { presentCultivarSummary } from '../cultivars/cultivar.presenter';
-import { mediaUrl } from '../tours/tour.presenter';
+import { cultivarByIdOrSlug } from '../cultivars/cultivar.service';
+import { posterUrl, topRenditionUrl } from '../tours/tour.presenter';
 import { sanitizeRichText } from '../tours/sanitize';
+import { publishedMoments } from '../watch/published-moments';
 
 /** A published tour moment that shows a record. */
 export interface Moment {
@@ -52,33 +54,15 @@ export class LearningService {
     return { id: String(c.id), traits: (c.traits ?? {}) as TraitProfile };
   }
 
-  /** Published moments for many records in one query, earliest stop of each tour first. */
+  /** Published moments for many records in one query, newest tour first, each tour's stops by time. */
   async momentsFor(cultivarIds: number[], perRecord = MOMENTS_PER_RECORD): Promise<Map<number, Moment[]>> {
     const map = new Map<number, Moment[]>();
-    if (!cultivarIds.length) return map;
-    const stops = await this.dataSource
-      .getRepository(Stop)
-      .createQueryBuilder('s')
-      .innerJoinAndSelect('s.tour', 't')
-      .where('s.cultivarId IN (:...ids)', { ids: cultivarIds })
-      .andWhere("t.state = 'published'")
-      .orderBy('t.filmedOn', 'DESC')
-      .addOrderBy('s.startMs', 'ASC')
-      .getMany();
-    for (const s of stops) {
+    const { moments } = await publishedMoments(this.dataSource, cultivarIds, { order: 'newest' });
+    for (const s of moments) {
       const list = map.get(s.cultivarId!) ?? [];
       if (list.length >= perRecord) continue;
-      const t = s.tour as Tour;
-      const top = (t.renditions ?? []).slice().sort((a, b) => b.height - a.height)[0];
-      list.push({
-        tourId: t.id,
-        tourTitle: t.title,
-        stopId: s.id,
-        startMs: s.startMs,
-        endMs: s.endMs,
-        posterUrl: t.posterFile ? mediaUrl(t, t.posterFile) : null,
-        videoUrl: top ? mediaUrl(t, top.file) : null,
-      });
+      const t = s.tour;
+      list.push({ tourId: t.id, tourTitle: t.title, stopId: s.id, startMs: s.startMs, endMs: s.endMs, posterUrl: posterUrl(t), videoUrl: topRenditionUrl(t) });
       map.set(s.cultivarId!, list);
     }
     return map;
@@ -118,8 +102,7 @@ export class LearningService {
   }
 
   private async approvedByIdOrSlug(idOrSlug: string): Promise<Cultivar> {
-    const repo = this.dataSource.getRepository(Cultivar);
-    const c = /^\d+$/.test(idOrSlug) ? await repo.findOneBy({ id: Number(idOrSlug) }) : await repo.findOneBy({ slug: idOrSlug });
+    const c = await this.dataSource.getRepository(Cultivar).findOneBy(cultivarByIdOrSlug(idOrSlug));
     if (!c || c.status !== 'approved') throw new NotFound('No such cultivar record.');
     return c;
   }
@@ -206,10 +189,9 @@ export class LearningService {
     const byId = new Map(records.map((r) => [r.id, r]));
     const payload = `${stop.id}.${answer.id}.${optionIds.join('-')}.${Date.now()}`;
     const t = stop.tour as Tour;
-    const top = (t.renditions ?? []).slice().sort((a, b) => b.height - a.height)[0];
     return {
       token: `${Buffer.from(payload).toString('base64url')}.${this.sign(payload)}`,
-      clip: { tourId: t.id, startMs: stop.startMs, endMs: stop.endMs, videoUrl: top ? mediaUrl(t, top.file) : null, posterUrl: t.posterFile ? mediaUrl(t, t.posterFile) : null },
+      clip: { tourId: t.id, startMs: stop.startMs, endMs: stop.endMs, videoUrl: topRenditionUrl(t), posterUrl: posterUrl(t) },
       options: optionIds.map((id) => presentCultivarSummary(byId.get(id) ?? answer)),
     };
   }

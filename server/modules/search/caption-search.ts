@@ -3,11 +3,11 @@ import { cuePlainText } from '../../../shared/captions/cue-text';
 import { findNames, type NameIndex } from '../../../shared/names/matcher';
 import { normalizeName } from '../../../shared/names/normalize';
 import { markWords, mergeSpans, type TextSpan } from '../../../shared/search/text-fold';
+import { likeContains } from '../../db/like';
 import {
   INNODB_FT_DEFAULTS,
   booleanAllPrefix,
   booleanAnyGroup,
-  likeContains,
   markPlan,
   planWords,
   regExpUsable,

@@ -88,16 +88,6 @@ export function booleanAnyGroup(groups: readonly (readonly string[])[]): string 
     .join(' ');
 }
 
-/** Escapes LIKE's wildcards and its escape character, so "50%" and "a_b" mean those characters. */
-export function escapeLike(s: string): string {
-  return s.replace(/[\\%_]/g, (c) => `\\${c}`);
-}
-
-/** `%s%` with wildcards in `s` escaped. */
-export function likeContains(s: string): string {
-  return `%${escapeLike(s)}%`;
-}
-
 /** Escapes the characters PCRE treats specially, for a REGEXP built around a word. */
 export function escapeRegExp(s: string): string {
   return s.replace(/[\\^$.*+?()[\]{}|-]/g, (c) => `\\${c}`);

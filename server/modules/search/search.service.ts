@@ -6,7 +6,7 @@ import { Tour } from '../../db/entities/tour.entity';
 import { BadRequest } from '../../errors/http-error';
 import { presentCultivarSummary } from '../cultivars/cultivar.presenter';
 import { presentStopCultivar } from '../stops/stop.presenter';
-import { mediaUrl } from '../tours/tour.presenter';
+import { posterUrl } from '../tours/tour.presenter';
 import { momentLink, momentThumbnail } from '../watch/thumbnail.presenter';
 import { CaptionSearch, MOMENT_CAP, momentSpans, plainCueText, rankMoments, type CueHit, type NameTarget } from './caption-search';
 import { CultivarCatalogue } from './cultivar-catalogue';
@@ -96,7 +96,7 @@ export class SearchService {
           publishedAt: tour.publishedAt?.toISOString() ?? null,
           author: { id: tour.authorId, displayName: tour.author?.displayName ?? '' },
           durationMs: tour.durationMs,
-          posterUrl: tour.posterFile ? mediaUrl(tour, tour.posterFile) : null,
+          posterUrl: posterUrl(tour),
           snippet,
           link: `/tours/${tour.id}`,
         })),

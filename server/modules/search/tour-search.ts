@@ -1,7 +1,7 @@
 import type { DataSource } from 'typeorm';
 import { foldText, markWords, snippetAround, type MarkWord, type TextSpan } from '../../../shared/search/text-fold';
 import { Tour } from '../../db/entities/tour.entity';
-import { likeContains } from './fulltext';
+import { likeContains } from '../../db/like';
 import { htmlToText } from './html-text';
 
 /** Most tours one search looks at (a club site has far fewer published tours). */

@@ -1,6 +1,6 @@
 import type { EntityManager } from 'typeorm';
 import { replaceVariant } from '../../../shared/names/replace';
-import { likePattern } from '../cultivars/cultivar.service';
+import { likeContains } from '../../db/like';
 
 /** A cue with where it belongs, as the spelling-fix queries read it. */
 export interface CueHit {
@@ -46,7 +46,7 @@ export async function cuesToChange(
 ): Promise<CueHit[]> {
   const word = longestWord(proposedText);
   if (!word) return [];
-  const params: unknown[] = [likePattern(word)];
+  const params: unknown[] = [likeContains(word)];
   let where = 'c.text LIKE ?';
   if (opts.cueId !== undefined) {
     where += ' AND c.id = ?';

@@ -1,6 +1,5 @@
 import { Router } from 'express';
 import rateLimit from 'express-rate-limit';
-import { z } from 'zod';
 import {
   declineFixInput,
   detectFixesInput,
@@ -11,12 +10,10 @@ import {
 } from '../../../shared/schemas/spelling-fixes';
 import { HttpError } from '../../errors/http-error';
 import { requireRole, requireUser } from '../../middleware/auth';
-import { parsedQuery, validateBody, validateQuery } from '../../middleware/validate';
+import { idParam, parsedQuery, validateBody, validateQuery } from '../../middleware/validate';
 import type { NameDetection } from './name-detection';
 import { presentFixDetail, presentFixRow } from './spelling-fix.presenter';
 import type { SpellingFixService } from './spelling-fix.service';
-
-const idParam = z.coerce.number().int().min(1);
 
 /** Flags per person per window: plenty for a careful viewer, a brake on scripted floods. */
 export const FLAG_LIMIT = 60;

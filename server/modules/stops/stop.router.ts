@@ -1,14 +1,11 @@
 import { Router, type Response } from 'express';
-import { z } from 'zod';
 import { trackLangQuery } from '../../../shared/schemas/captions';
 import { stopInput, updateStopInput } from '../../../shared/schemas/stops';
 import { requireRole } from '../../middleware/auth';
-import { parsedQuery, validateBody, validateQuery } from '../../middleware/validate';
+import { idParam, parsedQuery, validateBody, validateQuery } from '../../middleware/validate';
 import { presentJob } from '../tours/tour.presenter';
 import { presentStop } from './stop.presenter';
 import type { StopService, TextTrack } from './stop.service';
-
-const idParam = z.coerce.number().int().min(1);
 
 /** Generated tracks are what the player loads: served as WebVTT, cached briefly only when public. */
 function sendTextTrack(res: Response, track: TextTrack): void {

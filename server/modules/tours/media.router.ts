@@ -1,12 +1,10 @@
 import { Router } from 'express';
 import path from 'node:path';
 import { stat } from 'node:fs/promises';
-import { z } from 'zod';
 import { NotFound } from '../../errors/http-error';
 import type { MediaStorage } from '../../media/storage';
+import { idParam } from '../../middleware/validate';
 import type { TourService } from './tour.service';
-
-const idParam = z.coerce.number().int().min(1);
 
 const CONTENT_TYPES: Record<string, string> = { '.mp4': 'video/mp4', '.jpg': 'image/jpeg', '.jpeg': 'image/jpeg', '.webp': 'image/webp', '.vtt': 'text/vtt; charset=utf-8' };
 

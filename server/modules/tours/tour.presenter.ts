@@ -22,11 +22,24 @@ export function mediaUrl(tour: Tour, file: string): string {
   return `/media/tours/${tour.id}/${encodeURIComponent(file)}?v=${encodeURIComponent(tour.mediaDir?.split('/').pop() ?? '0')}`;
 }
 
+/** The poster picture's URL, or null when the tour has none yet. */
+export function posterUrl(tour: Tour): string | null {
+  return tour.posterFile ? mediaUrl(tour, tour.posterFile) : null;
+}
+
+/** The tour's renditions, tallest first: the order players list them and clips pick from. */
+function tallestFirst(tour: Tour) {
+  return (tour.renditions ?? []).slice().sort((a, b) => b.height - a.height);
+}
+
+/** The URL of the tallest rendition, for a clip of one moment; null before transcoding. */
+export function topRenditionUrl(tour: Tour): string | null {
+  const top = tallestFirst(tour)[0];
+  return top ? mediaUrl(tour, top.file) : null;
+}
+
 export function presentTour(tour: Tour, viewer: User | undefined, job?: Job | null): TourDto {
-  const renditions = (tour.renditions ?? [])
-    .slice()
-    .sort((a, b) => b.height - a.height)
-    .map((r) => ({ height: r.height, width: r.width, bytes: r.bytes, url: mediaUrl(tour, r.file), label: `${r.height}p` }));
+  const renditions = tallestFirst(tour).map((r) => ({ height: r.height, width: r.width, bytes: r.bytes, url: mediaUrl(tour, r.file), label: `${r.height}p` }));
   return {
     id: tour.id,
     title: tour.title,
@@ -41,7 +54,7 @@ export function presentTour(tour: Tour, viewer: User | undefined, job?: Job | nu
     height: tour.height,
     sourceName: canEditTour(viewer, tour) ? tour.sourceName : null,
     sourceCodecs: tour.sourceCodecs,
-    posterUrl: tour.posterFile ? mediaUrl(tour, tour.posterFile) : null,
+    posterUrl: posterUrl(tour),
     thumbStrip: tour.thumbStrip
       ? { ...tour.thumbStrip, sheets: tour.thumbStrip.sheets.map((s) => ({ url: mediaUrl(tour, s.file), width: s.width, height: s.height })) }
       : null,

@@ -5,12 +5,11 @@ import { z } from 'zod';
 import { listToursQuery, tourDetailsInput, updateTourInput } from '../../../shared/schemas/tours';
 import { BadRequest } from '../../errors/http-error';
 import { requireRole } from '../../middleware/auth';
-import { parsedQuery, validateBody, validateQuery } from '../../middleware/validate';
+import { idParam, parsedQuery, validateBody, validateQuery } from '../../middleware/validate';
 import type { MediaStorage } from '../../media/storage';
 import { presentJob, presentTour } from './tour.presenter';
 import type { TourService } from './tour.service';
 
-const idParam = z.coerce.number().int().min(1);
 const transcodeInput = z.object({ keyframeTimesSec: z.array(z.number().min(0).max(4 * 3600)).max(500).default([]) });
 
 /** Multer to disk under media/tmp with the configured size limit; one file field named "video". */

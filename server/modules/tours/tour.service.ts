@@ -5,6 +5,7 @@ import { hasRole } from '../../../shared/schemas/common';
 import type { ListToursQuery, TourDetailsInput, UpdateTourInput } from '../../../shared/schemas/tours';
 import { Job } from '../../db/entities/job.entity';
 import { Tour } from '../../db/entities/tour.entity';
+import { likeContains } from '../../db/like';
 import type { User } from '../../db/entities/user.entity';
 import { Conflict, Forbidden, HttpError, NotFound } from '../../errors/http-error';
 import { JobQueue } from '../../jobs/queue';
@@ -21,7 +22,7 @@ export const TRANSCODE_JOB = 'transcode';
  * "Dissectum" and "Dissectum Group" both work). The column collation ignores case.
  */
 export function applyBrowseFilters(qb: SelectQueryBuilder<Tour>, q: Pick<ListToursQuery, 'garden' | 'cultivar' | 'group'>): void {
-  if (q.garden) qb.andWhere('t.garden LIKE :garden', { garden: `%${q.garden.replace(/[\\%_]/g, (c) => `\\${c}`)}%` });
+  if (q.garden) qb.andWhere('t.garden LIKE :garden', { garden: likeContains(q.garden) });
   if (q.cultivar) {
     const byId = /^\d+$/.test(q.cultivar);
     qb.andWhere(

@@ -1,10 +1,9 @@
 import { Router } from 'express';
 import { z } from 'zod';
 import { whereToSeeQuery } from '../../../shared/schemas/watch';
-import { parsedQuery, validateQuery } from '../../middleware/validate';
+import { idParam, parsedQuery, validateQuery } from '../../middleware/validate';
 import type { WatchService } from './watch.service';
 
-const idParam = z.coerce.number().int().min(1);
 const idOrSlugParam = z.string().trim().min(1).max(160);
 
 /** GET /api/tours/:id/watch (the tour page in one response) and GET /api/cultivars/:idOrSlug/moments ("where to see it"). */

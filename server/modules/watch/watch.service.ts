@@ -1,5 +1,4 @@
 import type { DataSource } from 'typeorm';
-import { hasRole } from '../../../shared/schemas/common';
 import type { WatchResponse, WhereToSeeQuery, WhereToSeeResponse } from '../../../shared/schemas/watch';
 import { CaptionTrack } from '../../db/entities/caption-track.entity';
 import { Cultivar } from '../../db/entities/cultivar.entity';
@@ -8,9 +7,11 @@ import { Tour } from '../../db/entities/tour.entity';
 import type { User } from '../../db/entities/user.entity';
 import { NotFound } from '../../errors/http-error';
 import { presentCultivarSummary } from '../cultivars/cultivar.presenter';
+import { canSeeCultivar, cultivarByIdOrSlug } from '../cultivars/cultivar.service';
 import { chapterTitle } from '../stops/stop.presenter';
 import { canViewTour } from '../tours/tour.policy';
 import { presentTour } from '../tours/tour.presenter';
+import { publishedMoments } from './published-moments';
 import { momentLink, momentThumbnail } from './thumbnail.presenter';
 import { TreeCardCache } from './tree-card.presenter';
 
@@ -63,10 +64,8 @@ export class WatchService {
 
   /** A record by id or slug as the viewer may see it: proposals only to their proposer and moderators. */
   private async visibleCultivar(idOrSlug: string, viewer: User | undefined): Promise<Cultivar> {
-    const where = /^\d+$/.test(idOrSlug) ? { id: Number(idOrSlug) } : { slug: idOrSlug.toLowerCase() };
-    const c = await this.dataSource.getRepository(Cultivar).findOneBy(where);
-    const visible = c && (c.status !== 'proposed' || hasRole(viewer?.role, 'moderator') || (viewer !== undefined && c.createdById === viewer.id));
-    if (!c || !visible) throw new NotFound('No such cultivar record.');
+    const c = await this.dataSource.getRepository(Cultivar).findOneBy(cultivarByIdOrSlug(idOrSlug));
+    if (!c || !canSeeCultivar(c, viewer)) throw new NotFound('No such cultivar record.');
     return c;
   }
 
@@ -76,28 +75,18 @@ export class WatchService {
    */
   async whereToSee(idOrSlug: string, viewer: User | undefined, q: WhereToSeeQuery): Promise<WhereToSeeResponse> {
     const cultivar = await this.visibleCultivar(idOrSlug, viewer);
-    const dir = q.order === 'newest' ? 'DESC' : 'ASC';
-    const [stops, total] = await this.dataSource
-      .getRepository(Stop)
-      .createQueryBuilder('s')
-      .innerJoinAndSelect('s.tour', 't', "t.state = 'published'")
-      .leftJoinAndSelect('t.author', 'a')
-      .where('s.cultivarId = :id', { id: cultivar.id })
-      .orderBy('COALESCE(t.filmed_on, DATE(t.published_at))', dir)
-      .addOrderBy('t.published_at', dir)
-      .addOrderBy('t.id', dir)
-      .addOrderBy('s.start_ms', 'ASC')
-      .offset((q.page - 1) * q.pageSize)
-      .limit(q.pageSize)
-      .getManyAndCount();
+    const { moments, total } = await publishedMoments(this.dataSource, [cultivar.id], {
+      order: q.order,
+      page: { offset: (q.page - 1) * q.pageSize, limit: q.pageSize },
+    });
     return {
       cultivar: presentCultivarSummary(cultivar),
       order: q.order,
       total,
       page: q.page,
       pageSize: q.pageSize,
-      items: stops.map((s) => {
-        const t = s.tour!;
+      items: moments.map((s) => {
+        const t = s.tour;
         return {
           tourId: t.id,
           tourTitle: t.title,

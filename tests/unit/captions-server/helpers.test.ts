@@ -5,7 +5,6 @@ import { canonicalLanguageTag } from '../../../server/modules/captions/lang-tag'
 import { buildTranscript } from '../../../server/modules/captions/transcript';
 import { fileStem } from '../../../server/modules/captions/caption.service';
 import { firstFreeSlug, slugify } from '../../../server/modules/cultivars/slug';
-import { likePattern } from '../../../server/modules/cultivars/cultivar.service';
 import { clock } from '../../../server/modules/stops/stop.service';
 import { heardNames, proposeStops } from '../../../server/modules/stops/stop-suggestions';
 import { buildNameIndex } from '../../../shared/names/matcher';
@@ -89,9 +88,5 @@ describe('small formatters', () => {
     expect(firstFreeSlug('acer-x', new Set(['acer-x', 'acer-x-2']))).toBe('acer-x-3');
     expect(fileStem('Fernhollow: spring walk (fictional)')).toBe('fernhollow-spring-walk-fictional');
     expect(fileStem('???')).toBe('tour');
-  });
-
-  it('likePattern escapes the MariaDB LIKE wildcards % and _ and the escape character', () => {
-    expect(likePattern('50%_a\\b')).toBe('%50\\%\\_a\\\\b%');
   });
 });

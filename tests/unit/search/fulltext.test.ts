@@ -1,15 +1,13 @@
-// How search words become MariaDB full-text and LIKE terms. Outside sources: MariaDB documentation —
+// How search words become MariaDB full-text and REGEXP terms. Outside sources: MariaDB documentation —
 // innodb_ft_min_token_size default 3 and innodb_ft_max_token_size default 84 (system variables), the
 // InnoDB default stopword list (information_schema.INNODB_FT_DEFAULT_STOPWORD: 36 rows, "the" twice),
-// boolean-mode operators (ft_boolean_syntax) and LIKE's "%", "_" and "\" escape (MariaDB LIKE).
+// boolean-mode operators (ft_boolean_syntax).
 import { describe, expect, it } from 'vitest';
 import {
   INNODB_DEFAULT_STOPWORDS,
   INNODB_FT_DEFAULTS,
   booleanAllPrefix,
   booleanAnyGroup,
-  escapeLike,
-  likeContains,
   planWords,
   regExpUsable,
   wholeWordRegExp,
@@ -51,11 +49,7 @@ describe('boolean-mode terms', () => {
   });
 });
 
-describe('LIKE and REGEXP', () => {
-  it('escapes %, _ and the escape character itself (MariaDB LIKE)', () => {
-    expect(escapeLike('50% a_b c\\d')).toBe('50\\% a\\_b c\\\\d');
-    expect(likeContains('%')).toBe('%\\%%');
-  });
+describe('REGEXP', () => {
   it('builds a whole-word pattern for ASCII words only', () => {
     expect(wholeWordRegExp('ao')).toBe('(^|[^[:alnum:]])ao([^[:alnum:]]|$)');
     expect(regExpUsable('ao')).toBe(true);
