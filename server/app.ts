@@ -124,7 +124,7 @@ export function createApp(deps: AppDeps): AppHandle {
   });
   api.use((req, res, next) => {
     csrfSynchronisedProtection(req, res, (err?: unknown) => {
-      if (err) return next(new HttpError(403, 'csrf_invalid', 'Your session token is missing or out of date. Reload the page and try again.'));
+      if (err) return next(new HttpError(403, 'csrf_invalid', 'This page is out of date (it may have been open a long time, or you signed in or out in another tab). Reload the page and try again.'));
       next();
     });
   });

@@ -34,20 +34,20 @@ export function errorHandler(opts: { exposeStack: boolean; log?: (err: unknown) 
     if (!req.complete) res.set('Connection', 'close');
     if (err instanceof HttpError) return res.status(err.status).json(body(err.code, err.message, err.fields));
     if (err instanceof ZodError) return res.status(400).json(body('invalid_input', 'Some fields need attention.', zodFields(err)));
-    if (err instanceof EntityNotFoundError) return res.status(404).json(body('not_found', 'Not found.'));
+    if (err instanceof EntityNotFoundError) return res.status(404).json(body('not_found', 'That item no longer exists, or the link is wrong.'));
     if (err instanceof MulterError) {
       const status = err.code === 'LIMIT_FILE_SIZE' ? 413 : 400;
-      return res.status(status).json(body(`upload_${err.code.toLowerCase()}`, err.code === 'LIMIT_FILE_SIZE' ? 'That file is larger than the upload limit.' : err.message));
+      return res.status(status).json(body(`upload_${err.code.toLowerCase()}`, err.code === 'LIMIT_FILE_SIZE' ? 'That file is larger than the upload limit.' : 'The upload could not be read. Choose the file again and retry.'));
     }
     if (err instanceof QueryFailedError && (err as QueryFailedError & { code?: string }).code === 'ER_DUP_ENTRY') {
-      return res.status(409).json(body('duplicate', 'That already exists.'));
+      return res.status(409).json(body('duplicate', 'Something with that name already exists; choose another name.'));
     }
     // body-parser errors carry a status and a type.
     const e = err as { status?: number; type?: string; message?: string };
     if (e.type === 'entity.parse.failed') return res.status(400).json(body('malformed_json', 'The request body is not valid JSON.'));
     if (e.type === 'entity.too.large') return res.status(413).json(body('too_large', 'The request body is too large.'));
     if (typeof e.status === 'number' && e.status >= 400 && e.status < 500) {
-      return res.status(e.status).json(body('bad_request', e.message ?? 'Bad request.'));
+      return res.status(e.status).json(body('bad_request', 'The request could not be read. Reload the page and try again.'));
     }
     log(err);
     const message = opts.exposeStack && err instanceof Error ? `Something went wrong on our side. ${err.stack}` : 'Something went wrong on our side.';

@@ -16,11 +16,14 @@ export function thumbInterval(durationSec: number): number {
   return Math.max(1, Math.ceil(durationSec / 200));
 }
 
-/** The first line of ffmpeg's complaint that an author can act on, without paths of ours. */
+/**
+ * What the author reads when preparing the video fails: a plain next step, then the converter's own
+ * line (the issue asks for ffmpeg's reason), with our storage paths taken out.
+ */
 export function authorFacingReason(message: string, storageRoot: string): string {
   const lines = message.split('\n').map((l) => l.replaceAll(storageRoot, '…').trim()).filter(Boolean);
-  const useful = lines.find((l) => /invalid|error|unsupported|not found|could not|failed|corrupt/i.test(l)) ?? lines[0] ?? 'unknown error';
-  return useful.slice(0, 500);
+  const useful = lines.find((l) => /invalid|error|unsupported|not found|could not|failed|corrupt/i.test(l)) ?? lines[0] ?? 'no reason given';
+  return `The video could not be prepared; the file may be damaged or in an unusual format. Export it again as MP4 from your camera or phone and upload it once more. (Converter said: ${useful.slice(0, 400)})`;
 }
 
 /**
@@ -104,7 +107,7 @@ export function transcodeJob(dataSource: DataSource, storage: MediaStorage): Job
     },
 
     async onRetry(job: Job, error: string) {
-      await tours.update({ id: job.subjectId }, { failureReason: `Attempt ${job.attempts} failed, trying again: ${authorFacingReason(error, storage.root)}` });
+      await tours.update({ id: job.subjectId }, { failureReason: `Attempt ${job.attempts} of ${job.maxAttempts} did not work; Grovewalk tries again in a moment. ${authorFacingReason(error, storage.root)}` });
     },
 
     async onFinalFailure(job: Job, error: string) {

@@ -498,7 +498,7 @@ export function validateUpload(
   if (!names.some((n) => ACCEPTED_CONTAINERS.includes(n))) {
     return refuse(
       'unsupported_container',
-      `This file is in a format we do not accept (${probe.container}). Please upload ${ACCEPTED_HINT}.`,
+      `This file is in a format we do not accept. Please upload ${ACCEPTED_HINT}.`,
     );
   }
   if (!probe.video) {
@@ -536,7 +536,7 @@ export function validateUpload(
     );
   }
   if (probe.video.codec === 'unknown' || probe.video.codec === 'none') {
-    return refuse('unsupported_codec', 'The picture in this file uses an encoding (codec) we cannot convert.');
+    return refuse('unsupported_codec', 'The picture in this file uses an encoding (codec) we cannot convert. Export it again as MP4 from your camera or phone and upload that.');
   }
   return { ok: true, probe };
 }

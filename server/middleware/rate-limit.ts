@@ -21,6 +21,6 @@ export function mailLimiter(limit = 5, windowMs = 15 * 60_000) {
     standardHeaders: 'draft-8',
     legacyHeaders: false,
     keyGenerator: (req) => `${ipKeyGenerator(req.ip ?? '')}|${String(req.body?.email ?? '').toLowerCase().slice(0, 254)}`,
-    handler: (_req, _res, next) => next(new HttpError(429, 'rate_limited', 'Too many requests for that address. Wait a few minutes and try again.')),
+    handler: (_req, _res, next) => next(new HttpError(429, 'rate_limited', 'Too many links have been asked for that e-mail address. Wait a few minutes and try again.')),
   });
 }

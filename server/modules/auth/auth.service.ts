@@ -90,7 +90,7 @@ export class AuthService {
     return this.deps.dataSource.transaction(async (m) => {
       const row = await this.consumeToken(m, token, 'verify');
       const user = await m.getRepository(User).findOneByOrFail({ id: row.userId });
-      if (user.disabledAt) throw new Forbidden('account_disabled', 'This account has been disabled. Contact the club.');
+      if (user.disabledAt) throw new Forbidden('account_disabled', 'This account has been disabled. If you think that is a mistake, ask an admin of your club.');
       if (!user.emailVerifiedAt) {
         user.emailVerifiedAt = new Date();
         await m.getRepository(User).update({ id: user.id }, { emailVerifiedAt: user.emailVerifiedAt });
@@ -111,7 +111,7 @@ export class AuthService {
     const user = await this.users.findOneBy({ email: input.email });
     const ok = await bcrypt.compare(input.password, user?.passwordHash ?? this.dummyHash);
     if (!user || !ok) throw new HttpError(401, 'bad_credentials', 'That e-mail and password do not match an account.');
-    if (user.disabledAt) throw new Forbidden('account_disabled', 'This account has been disabled. Contact the club.');
+    if (user.disabledAt) throw new Forbidden('account_disabled', 'This account has been disabled. If you think that is a mistake, ask an admin of your club.');
     if (!user.emailVerifiedAt) {
       throw new Forbidden('email_unverified', 'Please confirm your e-mail address first: use the link we sent you, or ask for a new one.');
     }
@@ -139,7 +139,7 @@ export class AuthService {
     await this.deps.dataSource.transaction(async (m) => {
       const row = await this.consumeToken(m, input.token, 'reset');
       const user = await m.getRepository(User).findOneByOrFail({ id: row.userId });
-      if (user.disabledAt) throw new Forbidden('account_disabled', 'This account has been disabled. Contact the club.');
+      if (user.disabledAt) throw new Forbidden('account_disabled', 'This account has been disabled. If you think that is a mistake, ask an admin of your club.');
       await m.getRepository(User).update(
         { id: user.id },
         // The link proved the mailbox, so the address counts as confirmed; other sessions end.

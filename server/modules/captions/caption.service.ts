@@ -259,20 +259,20 @@ export class CaptionService {
       const repo = m.getRepository(CaptionTrack);
       const track = await repo.findOne({ where: { id: trackId }, lock: { mode: 'pessimistic_write' } });
       if (!track) throw new NotFound('No such caption track.');
-      if (track.version !== input.version) throw await this.versionConflict(m, track, input.version, user);
+      if (track.version !== input.version) throw await this.versionConflict(m, track, user);
       await this.replaceCues(m, track.id, cues);
       await repo.update({ id: track.id }, { version: track.version + 1, updatedById: user.id });
       return { track: await repo.findOneByOrFail({ id: track.id }), cueCount: cues.length };
     });
   }
 
-  private async versionConflict(m: EntityManager, track: CaptionTrack, clientVersion: number, user: User): Promise<Conflict> {
+  private async versionConflict(m: EntityManager, track: CaptionTrack, user: User): Promise<Conflict> {
     const by = track.updatedById ? await m.getRepository(User).findOneBy({ id: track.updatedById }) : null;
     const who = !by ? 'Someone else' : by.id === user.id ? 'You (in another window or tab)' : by.displayName;
     return new Conflict(
       'version_conflict',
-      `${who} saved this track at ${utcMoment(track.updatedAt)} (version ${track.version}; you were editing version ${clientVersion}). ` +
-        'Your changes were not saved: reload the track to see theirs, then make your changes again.',
+      `${who} saved this track at ${utcMoment(track.updatedAt)}, while you were editing it. ` +
+        'Your changes are not saved yet: look at theirs first, then keep yours or take theirs.',
     );
   }
 

@@ -147,7 +147,7 @@ export class CultivarService {
     if (exceptId) qb.andWhere('c.id <> :id', { id: exceptId });
     const other = await qb.getOne();
     if (other) {
-      throw new Conflict('cultivar_exists', `A record named ${other.acceptedName} already exists (/${other.slug}${other.status === 'approved' ? '' : `, ${other.status}`}).`, {
+      throw new Conflict('cultivar_exists', `A cultivar record named ${other.acceptedName} already exists${other.status === 'proposed' ? ' (still waiting for approval)' : other.status === 'retired' ? ' (retired)' : ''}. Open it instead of adding another.`, {
         epithet: 'A record with this name exists.',
       });
     }
