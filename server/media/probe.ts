@@ -498,7 +498,7 @@ export function validateUpload(
   if (!names.some((n) => ACCEPTED_CONTAINERS.includes(n))) {
     return refuse(
       'unsupported_container',
-      `This file is in a format we do not accept. Please upload ${ACCEPTED_HINT}.`,
+      `This file is in a format we do not accept (${probe.container}). Please upload ${ACCEPTED_HINT}.`,
     );
   }
   if (!probe.video) {
