@@ -1,9 +1,6 @@
 import type { CultivarSummary } from '@shared/schemas/cultivars';
 import { Badge } from './badge';
 
-/** The parts of a record a printed name needs. */
-export type NamedRecord = Pick<CultivarSummary, 'acceptedName' | 'nameSegments' | 'fictional'>;
-
 /**
  * A cultivar's printed name with the botanical parts in italics (from the server's name segments),
  * so every screen follows the same writing rules.

@@ -55,13 +55,18 @@ export interface CultivarPickerProps {
   /** Text the search box starts with (e.g. the misheard words). */
   initialQuery?: string;
   error?: string;
+  /**
+   * For building a list (side by side, with `value` left null): each result reads "Add …" with a
+   * plus, and the picker stays a search box after each pick.
+   */
+  adds?: boolean;
 }
 
 /**
  * Choosing one approved cultivar record by typing part of its name: results are buttons, the
  * choice is shown with a way to change it. Used wherever a form needs "which record?".
  */
-export function CultivarPicker({ label, hint, value, onChange, exclude = [], initialQuery = '', error }: CultivarPickerProps) {
+export function CultivarPicker({ label, hint, value, onChange, exclude = [], initialQuery = '', error, adds = false }: CultivarPickerProps) {
   const id = useId();
   const [text, setText] = useState(initialQuery);
   const typed = useRef(false);
@@ -141,7 +146,12 @@ export function CultivarPicker({ label, hint, value, onChange, exclude = [], ini
           {items.map((c) => (
             <li key={c.id}>
               <button type="button" onClick={() => onChange(c)} className="flex min-h-11 w-full flex-wrap items-center gap-2 px-3 py-2 text-left hover:bg-moss-wash">
-                <span className="sr-only">Choose </span>
+                {adds && (
+                  <span aria-hidden="true" className="font-bold text-moss">
+                    +
+                  </span>
+                )}
+                <span className="sr-only">{adds ? 'Add ' : 'Choose '}</span>
                 <span className="flex-1">
                   <CultivarName record={c} />
                 </span>

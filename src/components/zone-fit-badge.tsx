@@ -1,4 +1,4 @@
-import type { ZoneFitVerdict } from '@shared/hardiness';
+import type { ZoneFit, ZoneFitVerdict } from '@shared/hardiness';
 import { Badge, type BadgeTone } from './badge';
 
 const tones: Record<ZoneFitVerdict, BadgeTone> = { yes: 'moss', marginal: 'ochre', no: 'maple', unknown: 'plain' };
@@ -28,5 +28,25 @@ export function ZoneFitBadge({ fits, zone }: { fits: ZoneFitVerdict; zone: strin
       </span>
       {zoneFitWords(fits, zone)}
     </Badge>
+  );
+}
+
+/**
+ * The verdict with its reason and, when the reason suggests burying or sheltering a container, the
+ * safety caution that goes with that advice. Every page that shows a zone fit uses this, so the
+ * caution can never be left out.
+ */
+export function ZoneFitNote({ fit, zone, className = 'text-sm' }: { fit: Pick<ZoneFit, 'fits' | 'reason' | 'caution'>; zone: string | null; className?: string }) {
+  return (
+    <div className={className}>
+      <ZoneFitBadge fits={fit.fits} zone={zone} />
+      {fit.reason && <p className="mt-1 text-ink-soft">{fit.reason}</p>}
+      {fit.caution && (
+        <p className="mt-1 rounded-md border-l-4 border-ochre bg-ochre-wash px-3 py-1.5 text-ink">
+          <strong>Take care: </strong>
+          {fit.caution}
+        </p>
+      )}
+    </div>
   );
 }

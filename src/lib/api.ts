@@ -140,7 +140,7 @@ function errorFromBody(status: number, body: unknown, retryAfterSeconds: number 
     message:
       status >= 500
         ? 'The server ran into a problem. Try again in a moment.'
-        : `The request failed (HTTP ${status}). Reload the page and try again.`,
+        : `Grovewalk could not do that (error ${status}). Reload the page and try again.`,
     retryAfterSeconds,
   });
 }

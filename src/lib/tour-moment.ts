@@ -30,13 +30,17 @@ export function tourMomentHref(tourId: number, startMs: number): string {
   return `/tours/${tourId}?t=${startParam(startMs)}`;
 }
 
-/** "m:ss" (or "h:mm:ss") for a position in a tour, for link text. */
+/**
+ * A position or length in a tour as a clock: "0:07", "4:05", "1:02:03" (hours only when needed).
+ * Fractions of a second are dropped, never rounded up, so the clock does not run ahead of the
+ * picture; anything that is not a time reads "0:00".
+ */
 export function clockText(ms: number): string {
-  const total = Math.max(0, Math.floor(ms / 1000));
+  if (!Number.isFinite(ms) || ms < 0) return '0:00';
+  const total = Math.floor(ms / 1000 + 1e-6);
   const h = Math.floor(total / 3600);
   const m = Math.floor((total % 3600) / 60);
-  const s = total % 60;
-  const ss = String(s).padStart(2, '0');
+  const ss = String(total % 60).padStart(2, '0');
   return h > 0 ? `${h}:${String(m).padStart(2, '0')}:${ss}` : `${m}:${ss}`;
 }
 

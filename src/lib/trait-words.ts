@@ -11,7 +11,6 @@ import {
   type HeightClass,
   type LeafForm,
   type LeafSize,
-  type PlantColour,
   type Season,
   type SunTolerance,
 } from '@shared/traits';
@@ -131,9 +130,4 @@ export function seasonForMonth(month: number): Season | null {
   if (month >= 6 && month <= 8) return 'summer';
   if (month >= 9 && month <= 11) return 'autumn';
   return null;
-}
-
-/** True when the id names a palette colour. */
-export function isPlantColour(id: string): id is PlantColour {
-  return PLANT_COLOURS.some((c) => c.id === id);
 }

@@ -284,7 +284,7 @@ describe('an author captions a tour and marks its stops', () => {
     ]);
     const timeline = page.getByRole('list', { name: 'Stops on the timeline' });
     await eventually(() => timeline.getByRole('listitem').count()).toBe(2);
-    await page.getByRole('heading', { name: 'Place keyframes at stop starts?' }).waitFor();
+    await page.getByRole('heading', { name: 'Make jumps land exactly on each stop?' }).waitFor();
     await shot(page, SUITE, '07-stops');
   });
 
@@ -299,7 +299,7 @@ describe('an author captions a tour and marks its stops', () => {
     await shot(page, SUITE, '08-stop-overlap');
     await form.getByRole('button', { name: 'Cancel' }).click();
 
-    await page.getByRole('button', { name: 'Place keyframes at stop starts' }).click();
+    await page.getByRole('button', { name: 'Prepare the video again for exact jumps' }).click();
     await page.getByText(/^Queued\. The video is being prepared again/).waitFor();
   });
 

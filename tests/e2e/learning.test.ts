@@ -104,7 +104,7 @@ describe('a learner narrows down a tree with the finder and compares it with its
     await expect.poll(() => candidates(page).first().getByRole('heading').textContent(), WAIT).toContain('Sora-no-hane');
     const top = candidates(page).first();
     // Three of three answers match: (3 + 0.5) / (3 + 1) = 87.5 %, shown rounded (hand-worked from the scoring rule in shared/finder/score.ts).
-    expect(await top.getByText(/% match$/).textContent()).toBe('88% match');
+    expect(await top.getByText(/^fits your answers: \d+%$/).textContent()).toBe('fits your answers: 88%');
     expect(await top.getByText('Invented for the demo').count()).toBe(1);
     // The lime-green twin conflicts on spring colour and says so with a mark, not colour alone.
     const twin = candidates(page).filter({ hasText: 'Mizu-kagari' });

@@ -289,7 +289,7 @@ describe('authors propose records and moderators look after them', () => {
   it('an author proposes a record; the name is checked as it is typed', async () => {
     await signIn(page, AUTHOR);
     await page.goto(`${base}/cultivars`);
-    await page.getByRole('link', { name: 'Propose a record' }).click();
+    await page.getByRole('link', { name: 'Propose a cultivar record' }).click();
     await page.waitForURL(/\/cultivars\/new$/);
     // Double quotes break the RHS style for cultivar epithets; the shared check says so at once.
     await page.getByLabel('Cultivar epithet').fill('"Tsuki no michi"');
@@ -314,7 +314,7 @@ describe('authors propose records and moderators look after them', () => {
     await page.getByRole('heading', { name: 'Moderator tools' }).waitFor();
     await page.getByRole('button', { name: 'Approve' }).click();
     await page.getByText('Approved: listed everywhere').waitFor();
-    await page.getByLabel('Add a variant').fill('Suki no michi');
+    await page.getByLabel('Add a name variant').fill('Suki no michi');
     await page.getByRole('button', { name: 'Add', exact: true }).click();
     await page.getByRole('region', { name: 'Also written or heard as' }).getByText('Suki no michi').waitFor();
     await page.getByRole('button', { name: 'Edit name, traits and notes' }).click();

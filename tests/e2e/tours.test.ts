@@ -227,8 +227,8 @@ describe('an author uploads a tour, watches it being prepared, publishes it and 
     await page.locator('.video-js').focus();
     await page.keyboard.press('ArrowLeft');
     await eventually(async () => (await videoState(page))?.time ?? -1).toBeCloseTo(Math.max(0, Math.min(5, duration) - 5), 1);
-    await page.getByRole('button', { name: /^Keyboard keys/ }).click();
-    await page.getByRole('dialog', { name: 'Keyboard keys' }).getByRole('table', { name: 'Keyboard shortcuts for the video' }).waitFor();
+    await page.getByRole('button', { name: /^Keyboard shortcuts/ }).click();
+    await page.getByRole('dialog', { name: 'Keyboard shortcuts' }).getByRole('table', { name: 'Keyboard shortcuts for the video' }).waitFor();
     await shot(page, SUITE, '08b-keyboard-help');
   });
 

@@ -215,7 +215,7 @@ describe('a viewer searches a misspelt name and jumps to the tree', () => {
   it('the keyboard help lists the keys and closes with Escape', async () => {
     await page.locator('.video-js').first().focus();
     await page.keyboard.press('?');
-    const dialog = page.getByRole('dialog', { name: 'Keyboard keys' });
+    const dialog = page.getByRole('dialog', { name: 'Keyboard shortcuts' });
     await dialog.waitFor();
     expect(await dialog.getByText('Next stop on the trail').count()).toBe(1);
     await shot(page, SUITE, '04-keyboard-help');

@@ -1,6 +1,7 @@
 import { useParams } from 'react-router';
 import { SpellingQueuePage } from '@/features/spelling/components/spelling-queue-page';
 import { TourNamesPage } from '@/features/spelling/components/tour-names-page';
+import { positiveIntParam } from '@/lib/route-params';
 import { RequireUser } from '../guards';
 
 /** /moderation/spelling, moderators and admins (the server enforces it). */
@@ -8,10 +9,9 @@ export function SpellingQueueRoute() {
   return <RequireUser role="moderator">{() => <SpellingQueuePage />}</RequireUser>;
 }
 
-/** /tours/:tourId/names — the captions of a tour with "Flag a name" on each; open to everyone (flagging asks to sign in). */
+/** /tours/:tourId/names — the captions of a tour with "Flag a misspelt name" on each; open to everyone (flagging asks to sign in). */
 export function TourNamesRoute() {
-  const raw = useParams().tourId ?? '';
-  const id = /^\d{1,9}$/.test(raw) && Number(raw) >= 1 ? Number(raw) : null;
+  const id = positiveIntParam(useParams().tourId);
   if (!id) return <SpellingQueueMissingTour />;
   return <TourNamesPage key={id} tourId={id} />;
 }

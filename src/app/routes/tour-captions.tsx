@@ -1,30 +1,22 @@
 import { Link, useParams, type LoaderFunctionArgs } from 'react-router';
 import { hasRole } from '@shared/schemas/common';
 import { buttonClasses } from '@/components/button';
-import { ErrorState } from '@/components/error-state';
 import { Page } from '@/components/page';
-import { Loading } from '@/components/spinner';
 import { tracksQueryOptions } from '@/features/captions/api/captions-api';
 import { CaptionsWorkspace } from '@/features/captions/components/captions-workspace';
 import { stopsQueryOptions } from '@/features/stops/api/stops-api';
 import { StopsPanel } from '@/features/stops/components/stops-panel';
 import { StopsTimeline } from '@/features/stops/components/stops-timeline';
 import { tourQueryOptions, useTour } from '@/features/tours/api/tours-api';
+import { TourLoadState } from '@/features/tours/components/tour-load-state';
 import { TourNotFound } from '@/features/tours/components/tour-not-found';
-import { isApiError } from '@/lib/api';
 import { queryClient } from '@/lib/query-client';
+import { positiveIntParam } from '@/lib/route-params';
 import { RequireUser } from '../guards';
-
-/** The tour id from the address, or null for anything that is not a positive whole number. */
-function tourIdOf(raw: string | undefined): number | null {
-  if (!raw || !/^\d{1,9}$/.test(raw)) return null;
-  const id = Number(raw);
-  return id >= 1 ? id : null;
-}
 
 /** Starts fetching the tour, its caption tracks and its stops while the editor's code loads. */
 export function tourCaptionsLoader({ params }: LoaderFunctionArgs) {
-  const id = tourIdOf(params.tourId);
+  const id = positiveIntParam(params.tourId);
   if (id) {
     void queryClient.prefetchQuery(tourQueryOptions(id));
     void queryClient.prefetchQuery(tracksQueryOptions(id));
@@ -51,21 +43,7 @@ function NotAnEditor({ tourId }: { tourId: number }) {
 
 function CaptionsForTour({ tourId }: { tourId: number }) {
   const tour = useTour(tourId);
-  if (tour.isPending) {
-    return (
-      <div className="mx-auto max-w-7xl px-4 sm:px-6">
-        <Loading label="Loading the tour…" />
-      </div>
-    );
-  }
-  if (tour.isError) {
-    if (isApiError(tour.error) && tour.error.status === 404) return <TourNotFound />;
-    return (
-      <div className="mx-auto max-w-3xl px-4 sm:px-6">
-        <ErrorState title="The tour could not be loaded" error={tour.error} onRetry={() => void tour.refetch()} />
-      </div>
-    );
-  }
+  if (!tour.isSuccess) return <TourLoadState query={tour} width="max-w-7xl" />;
   if (!tour.data.canEdit) return <NotAnEditor tourId={tourId} />;
   return (
     <CaptionsWorkspace
@@ -78,7 +56,7 @@ function CaptionsForTour({ tourId }: { tourId: number }) {
 
 /** /tours/:tourId/captions, the captions and stops editor; editors only (the server enforces it). */
 export function TourCaptionsRoute() {
-  const id = tourIdOf(useParams().tourId);
+  const id = positiveIntParam(useParams().tourId);
   if (!id) return <TourNotFound />;
   return (
     <RequireUser>

@@ -2,7 +2,7 @@ import { describe, expect, it } from 'vitest';
 import { compareRecords } from '@shared/finder/compare';
 import { compareHref, parseCompareIds } from '@/features/compare/lib/compare-ids';
 import { formatCompareCell } from '@/features/compare/lib/compare-values';
-import { noteFor, noteHtmlToPlainText, pairsOf, plainTextToNoteHtml } from '@/features/compare/lib/pair-notes';
+import { noteFor, pairsOf } from '@/features/compare/lib/pair-notes';
 
 describe('record ids from the address', () => {
   it('keeps positive whole numbers in order, once each', () => {
@@ -40,18 +40,6 @@ describe('pair notes', () => {
     expect(noteFor(notes, 2, 8)).toBeUndefined();
   });
 
-  it('plain text becomes escaped paragraphs, and back', () => {
-    const text = 'Spring leaves: red on one, lime on the other.\nLook in April.\n\n<Both> weep & mound.';
-    const html = plainTextToNoteHtml(text);
-    expect(html).toBe('<p>Spring leaves: red on one, lime on the other.<br>Look in April.</p><p>&lt;Both&gt; weep &amp; mound.</p>');
-    expect(noteHtmlToPlainText(html)).toBe(text);
-    expect(plainTextToNoteHtml('  \n\n ')).toBe('');
-  });
-
-  it('rich notes written elsewhere come back as readable blocks', () => {
-    expect(noteHtmlToPlainText('<p><strong>Bark</strong> is the tell.</p><ul><li>green</li><li>grey</li></ul>')).toBe('Bark is the tell.\n\ngreen\n\ngrey');
-    expect(noteHtmlToPlainText('<p>&#8220;Crane&#x201D;&nbsp;red</p>')).toBe('“Crane” red');
-  });
 });
 
 describe('side by side cells', () => {

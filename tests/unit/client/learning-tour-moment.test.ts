@@ -21,6 +21,8 @@ describe('links to a tour moment', () => {
     expect(clockText(8000)).toBe('0:08');
     expect(clockText(61_999)).toBe('1:01');
     expect(clockText(3_725_000)).toBe('1:02:05');
+    expect(clockText(-5)).toBe('0:00');
+    expect(clockText(Number.NaN)).toBe('0:00');
   });
 });
 

@@ -1,8 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import { thumbTileAt } from '@shared/thumb-tile';
 import { apiQueryFromFilters, filtersFromParams, isFiltered, paramsFromFilters } from '@/features/cultivars/lib/index-params';
-import { notesHaveFormatting, notesHtmlToText, textToNotesHtml } from '@/features/cultivars/lib/notes-text';
-import { spriteStyle } from '@/features/cultivars/lib/sprite';
 import { letterBar, letterParam, matchNote, spokenSummary, variantsText } from '@/features/glossary/lib/glossary-words';
 
 describe('cultivar index address', () => {
@@ -22,26 +20,11 @@ describe('cultivar index address', () => {
   });
 });
 
-describe('notes as plain paragraphs', () => {
-  it('turns stored HTML into paragraphs and back, escaping what was typed', () => {
-    const html = '<p>A low, weeping lace-leaf &amp; a slow grower.</p><p><strong>Care note:</strong> prune in late winter.<br>Lift pots with help.</p>';
-    const text = notesHtmlToText(html);
-    expect(text).toBe('A low, weeping lace-leaf & a slow grower.\n\nCare note: prune in late winter.\nLift pots with help.');
-    expect(textToNotesHtml(text)).toBe('<p>A low, weeping lace-leaf &amp; a slow grower.</p><p>Care note: prune in late winter.<br>Lift pots with help.</p>');
-    expect(textToNotesHtml('<script>alert(1)</script>')).toBe('<p>&lt;script&gt;alert(1)&lt;/script&gt;</p>');
-    expect(notesHaveFormatting(html)).toBe(true);
-    expect(notesHaveFormatting('<p>plain<br>text</p>')).toBe(false);
-  });
-});
-
-describe('sprite tiles of tour moments', () => {
-  it('shifts the sheet by the tile position that ffmpeg\'s tile filter gives (libavfilter vf_tile.c: x = (n mod columns) × w, y = floor(n / columns) × h)', () => {
+describe('tiles of tour moments', () => {
+  it('finds the tile position that ffmpeg\'s tile filter gives (libavfilter vf_tile.c: x = (n mod columns) × w, y = floor(n / columns) × h)', () => {
     const strip = { everySec: 2, tileWidth: 160, tileHeight: 90, columns: 5, rows: 5, count: 40, sheets: ['/media/sheet-0.jpg', '/media/sheet-1.jpg'] };
     // 16 s at one picture every 2 s is picture 8: column 3, row 1 of the first sheet.
-    const tile = thumbTileAt(strip, 16_000)!;
-    const style = spriteStyle({ url: tile.sheet, x: tile.x, y: tile.y, w: tile.w, h: tile.h });
-    expect(style).toMatchObject({ backgroundImage: 'url("/media/sheet-0.jpg")', backgroundPosition: '-480px -90px', width: '160px', height: '90px' });
-    expect(spriteStyle({ url: '/a".jpg', x: 0, y: 0, w: 10, h: 10 }).backgroundImage).toBe('url("/a\\".jpg")');
+    expect(thumbTileAt(strip, 16_000)).toMatchObject({ index: 8, sheet: '/media/sheet-0.jpg', x: 480, y: 90, w: 160, h: 90 });
   });
 });
 

@@ -1,7 +1,8 @@
 import { describe, expect, it } from 'vitest';
 import { stopInput } from '@shared/schemas/stops';
 import { DEFAULT_STOP_MS, draftAtPlayhead, draftFromCue, overlapsAny, stopIndexAt } from '@/features/stops/lib/stop-draft';
-import { msAtFraction, percentAt, scaleLabel, scaleMarks } from '@/features/stops/lib/timeline-scale';
+import { msAtFraction, percentAt, scaleMarks } from '@/features/stops/lib/timeline-scale';
+import { clockText } from '@/lib/tour-moment';
 
 // Stop ranges are half-open, [start, end), like WebVTT cue timings in the HTML standard's "text
 // track cue" rules: a stop ending at 10 s and one starting at 10 s do not overlap. The ten-second
@@ -67,7 +68,7 @@ describe('timeline scale', () => {
     expect(scaleMarks(40_000)).toEqual([0, 10_000, 20_000, 30_000, 40_000]);
     expect(scaleMarks(7000)).toEqual([0, 1000, 2000, 3000, 4000, 5000, 6000, 7000]);
     expect(scaleMarks(20 * 60_000).length).toBeLessThanOrEqual(8);
-    expect(scaleLabel(90_000)).toBe('1:30');
-    expect(scaleLabel(3_720_000)).toBe('1:02:00');
+    expect(clockText(90_000)).toBe('1:30');
+    expect(clockText(3_720_000)).toBe('1:02:00');
   });
 });

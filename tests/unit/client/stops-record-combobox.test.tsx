@@ -72,7 +72,7 @@ function renderBox(value: StopRecord | null = null) {
 }
 
 describe('the record picker combobox', () => {
-  it('opens on focus with "Unidentified tree" first, the matching records in italics with the demo mark, and "Propose a new record" last', async () => {
+  it('opens on focus with "Unidentified tree" first, the matching records in italics with the demo mark, and "Propose a new cultivar record" last', async () => {
     const { input } = renderBox();
     expect(input.getAttribute('aria-expanded')).toBe('false');
     fireEvent.focus(input);
@@ -85,7 +85,7 @@ describe('the record picker combobox', () => {
       expect.stringMatching(/^Unidentified tree/),
       expect.stringContaining("'Sora-no-hane'"),
       expect.stringContaining("'Mizu-kagari'"),
-      expect.stringMatching(/^Propose a new record/),
+      expect.stringMatching(/^Propose a new cultivar record/),
     ]);
     expect(options[1]!.querySelector('i')?.textContent).toBe('Acer palmatum');
     expect(within(options[1]!).getByText('Invented for the demo')).toBeTruthy();
@@ -108,7 +108,7 @@ describe('the record picker combobox', () => {
     expect(input.getAttribute('aria-expanded')).toBe('false');
   });
 
-  it('wraps from the top to "Propose a new record", which opens the proposal with the typed text; Escape closes', async () => {
+  it('wraps from the top to "Propose a new cultivar record", which opens the proposal with the typed text; Escape closes', async () => {
     const { input, onPropose, onChange } = renderBox({ id: 11, acceptedName: records[0]!.acceptedName, fictional: true });
     expect(screen.getByText(records[0]!.acceptedName, { exact: false })).toBeTruthy();
     fireEvent.change(input, { target: { value: 'Tsuki-akari' } });

@@ -1,5 +1,6 @@
 import { describe, expect, it } from 'vitest';
-import { durationInWords, formatBytes, formatClock, formatDay, percentOf, timeLeftText, uploadProgressText } from '@/features/tours/lib/media-format';
+import { durationInWords, formatBytes, formatDay, percentOf, timeLeftText, uploadProgressText } from '@/features/tours/lib/media-format';
+import { clockText } from '@/lib/tour-moment';
 
 // Sources for the check values:
 // - SI prefixes (BIPM, The International System of Units, 9th edition 2019, Table 7): k = 10^3,
@@ -48,7 +49,7 @@ describe('upload progress wording (the example in the tours brief; % spacing per
   });
 });
 
-describe('formatClock and durationInWords (h:mm:ss clock, common practice)', () => {
+describe('clockText and durationInWords (h:mm:ss clock, common practice)', () => {
   it.each([
     [0, '0:00'],
     [7.9, '0:07'],
@@ -56,7 +57,7 @@ describe('formatClock and durationInWords (h:mm:ss clock, common practice)', () 
     [3723, '1:02:03'],
     [36_000, '10:00:00'],
   ])('%d s → %s', (s, text) => {
-    expect(formatClock(s)).toBe(text);
+    expect(clockText(s * 1000)).toBe(text);
   });
 
   it('says the same time in words', () => {

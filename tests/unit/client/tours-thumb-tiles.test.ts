@@ -22,7 +22,7 @@ const strip: ThumbStrip = {
 
 describe('thumbTileAt (row-major tiles as ffmpeg vf_tile lays them out)', () => {
   it('puts the first picture at the top left of the first sheet', () => {
-    expect(thumbTileAt(strip, 0)).toMatchObject({ index: 0, sheetUrl: '/media/tours/1/thumbs-001.jpg', x: 0, y: 0, width: 160, height: 90 });
+    expect(thumbTileAt(strip, 0)).toMatchObject({ index: 0, url: '/media/tours/1/thumbs-001.jpg', x: 0, y: 0, w: 160, h: 90 });
   });
 
   it('fills a row before moving down: picture 10 starts row 2', () => {
@@ -32,11 +32,11 @@ describe('thumbTileAt (row-major tiles as ffmpeg vf_tile lays them out)', () => 
 
   it('finds picture 123 (t = 246 s) on sheet 2 at column 3, row 2', () => {
     // 123 = 1 × 100 + 23; 23 % 10 = 3 → x = 480; floor(23 / 10) = 2 → y = 180.
-    expect(thumbTileAt(strip, 246.5)).toMatchObject({ index: 123, sheetUrl: '/media/tours/1/thumbs-002.jpg', x: 480, y: 180 });
+    expect(thumbTileAt(strip, 246.5)).toMatchObject({ index: 123, url: '/media/tours/1/thumbs-002.jpg', x: 480, y: 180 });
   });
 
   it('shows the last picture past the end and the first before the start', () => {
-    expect(thumbTileAt(strip, 10_000)).toMatchObject({ index: 229, sheetUrl: '/media/tours/1/thumbs-003.jpg', x: 1440, y: 180 });
+    expect(thumbTileAt(strip, 10_000)).toMatchObject({ index: 229, url: '/media/tours/1/thumbs-003.jpg', x: 1440, y: 180 });
     expect(thumbTileAt(strip, -4)).toMatchObject({ index: 0 });
   });
 

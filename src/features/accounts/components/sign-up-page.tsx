@@ -25,7 +25,7 @@ export function SignUpForm({ onDone }: { onDone: (email: string) => void }) {
         label="Display name"
         name="displayName"
         autoComplete="nickname"
-        hint="Shown beside your tours and comments. 2 to 60 characters."
+        hint="Shown to others beside your tours and the names you flag. 2 to 60 characters."
         error={errors.displayName}
       />
       <TextField label="E-mail" name="email" type="email" autoComplete="email" error={errors.email} />
@@ -71,7 +71,7 @@ export function SignUpPage() {
   }
 
   return (
-    <Page title="Create your account" intro="An account lets you take part in the club's garden walks and keeps your settings, such as metric or imperial sizes.">
+    <Page title="Create your account" intro="An account lets you flag misspelt names, keep your scores in Learn and keep your settings, such as your hardiness zone and metric or imperial sizes.">
       <Card>
         <SignUpForm onDone={setSentTo} />
       </Card>

@@ -41,15 +41,14 @@ export function DownloadsPanel({ tourId, track, unsaved }: { tourId: number; tra
           Stops
         </h3>
         <p className="text-sm text-ink-soft">
-          Chapters: one WebVTT cue per stop with its title. Metadata: one cue per stop whose text is JSON naming the cultivar record, for players that show the tree
-          beside the video.
+          Two WebVTT files for other video players: the stops by name and time, and which cultivar record each stop shows.
         </p>
         <div className="mt-2 flex flex-wrap gap-2">
           <a className={link} href={stopTrackUrl(tourId, 'chapters')} download={`tour-${tourId}-chapters.vtt`}>
-            Chapters (.vtt)
+            Stop list (.vtt)
           </a>
           <a className={link} href={stopTrackUrl(tourId, 'metadata')} download={`tour-${tourId}-metadata.vtt`}>
-            Stop records, metadata (.vtt)
+            Tree cards of the stops (.vtt)
           </a>
         </div>
       </section>

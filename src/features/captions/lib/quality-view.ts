@@ -54,12 +54,12 @@ const SECONDS = (ms: number) => `${ONE_DECIMAL(ms / 1000)} s`;
 /** Short names of the kinds, for the summary counts and the filter. */
 export const KIND_LABELS: Record<QualityKind, string> = {
   timing: 'Ends before it starts',
-  'reading-speed': 'Words per minute',
-  'reading-speed-cps': 'Characters per second',
+  'reading-speed': 'Too fast to read (words)',
+  'reading-speed-cps': 'Too fast to read (characters)',
   'too-short': 'Too short',
   'too-long': 'Too long',
-  'line-length': 'Line length',
-  'line-count': 'Lines',
+  'line-length': 'Line too long',
+  'line-count': 'Too many lines',
   overlap: 'Overlap',
   gap: 'Tiny gap',
 };
@@ -85,10 +85,10 @@ export function badgeFor(issue: QualityIssue): QualityBadge {
       label = 'ends before it starts';
       break;
     case 'reading-speed':
-      label = `${Math.round(issue.value)} wpm`;
+      label = `${Math.round(issue.value)} words/min`;
       break;
     case 'reading-speed-cps':
-      label = `${ONE_DECIMAL(issue.value)} cps`;
+      label = `${ONE_DECIMAL(issue.value)} characters/s`;
       break;
     case 'too-short':
       label = `short: ${SECONDS(issue.value)}`;

@@ -21,13 +21,13 @@ const plans = [
   {
     title: 'Find a named tree',
     to: '/search',
-    action: 'Search every walk',
+    action: 'Search the tours',
     text:
       'Search for a name, even half-remembered or misspelt, or for a feature such as coral bark. You get every moment, ' +
-      'in every walk, where that tree appears, and the video starts right there.',
+      'in every tour, where that tree appears, and the video starts right there.',
   },
   {
-    title: 'Learn the names',
+    title: 'Say the names right',
     to: '/glossary',
     action: 'Open the glossary',
     text:

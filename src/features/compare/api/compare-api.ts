@@ -1,7 +1,6 @@
-import { keepPreviousData, queryOptions, useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
+import { queryOptions, useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
 import { z } from 'zod';
 import { COMPARE_TRAITS } from '@shared/finder/compare';
-import { pageOf } from '@shared/schemas/common';
 import { cultivarSummarySchema } from '@shared/schemas/cultivars';
 import type { PairNoteInput } from '@shared/schemas/learning';
 import type { TraitProfile } from '@shared/traits';
@@ -37,21 +36,9 @@ export type CompareResponse = z.infer<typeof compareResponse>;
 /** One row of side by side. */
 export type CompareRowDto = CompareResponse['comparison']['rows'][number];
 
-const searchPage = pageOf(cultivarSummarySchema);
-/** A page of record summaries for the picker. */
-export type CultivarSearchPage = z.infer<typeof searchPage>;
-
-/** How many records the picker lists at once. */
-export const PICKER_PAGE_SIZE = 8;
-
 /** Two or three records side by side. */
 export function fetchCompare(ids: readonly number[], signal?: AbortSignal): Promise<CompareResponse> {
   return api.get('/api/compare', { query: { ids: ids.join(',') }, schema: compareResponse, signal });
-}
-
-/** Approved records whose name (or a known misspelling) contains the text; A–Z when it is empty. */
-export function searchCultivars(q: string, signal?: AbortSignal): Promise<CultivarSearchPage> {
-  return api.get('/api/cultivars', { query: { q, pageSize: PICKER_PAGE_SIZE }, schema: searchPage, signal });
 }
 
 /** Saves the note of a pair; authors and above only (the server checks). */
@@ -64,24 +51,9 @@ export function compareQueryOptions(ids: readonly number[]) {
   return queryOptions({ queryKey: compareKeys.detail(ids), queryFn: ({ signal }) => fetchCompare(ids, signal) });
 }
 
-/** Query options for the picker's search. */
-export function cultivarSearchQueryOptions(q: string) {
-  return queryOptions({
-    queryKey: compareKeys.search(q),
-    queryFn: ({ signal }) => searchCultivars(q, signal),
-    placeholderData: keepPreviousData,
-    staleTime: 60_000,
-  });
-}
-
 /** The comparison, fetched only for two or three ids. */
 export function useCompare(ids: readonly number[]) {
   return useQuery({ ...compareQueryOptions(ids), enabled: ids.length >= 2 && ids.length <= 3 });
-}
-
-/** The picker's results for the typed text. */
-export function useCultivarSearch(q: string) {
-  return useQuery(cultivarSearchQueryOptions(q));
 }
 
 /** Saves a pair note and refreshes every comparison (a pair can appear in several). */

@@ -6,11 +6,12 @@ import type { UnitSystem } from '@shared/units';
 import { Button, buttonClasses } from '@/components/button';
 import { Card } from '@/components/card';
 import { ClipVideo } from '@/components/clip-video';
+import { CultivarPicker } from '@/components/cultivar-picker';
 import { CultivarName, FictionalMark } from '@/components/cultivar-name';
 import { ErrorState } from '@/components/error-state';
 import { Page } from '@/components/page';
 import { Loading } from '@/components/spinner';
-import { ZoneFitBadge } from '@/components/zone-fit-badge';
+import { ZoneFitNote } from '@/components/zone-fit-badge';
 import { isApiError } from '@/lib/api';
 import { useMe } from '@/lib/auth';
 import { colourOf } from '@/lib/trait-words';
@@ -22,13 +23,26 @@ import { compareHref, MAX_COMPARE, parseCompareIds } from '../lib/compare-ids';
 import { formatCompareCell } from '../lib/compare-values';
 import { noteFor, pairsOf } from '../lib/pair-notes';
 import { PairNote } from './pair-note';
-import { RecordPicker } from './record-picker';
 
 const INTRO = 'Look-alike cultivars in columns, the traits that tell them apart first, each with a clip from a tour.';
 
 /** The epithet in single quotes, as the full names print it (ICNCP style per the RHS summary). */
 function shortName(c: Pick<CultivarSummary, 'epithet'>): string {
   return `'${c.epithet}'`;
+}
+
+/** The shared record picker in its adding form: each pick puts one more record beside the others. */
+function AddRecordPicker({ ids, onIds }: { ids: number[]; onIds: (next: number[]) => void }) {
+  return (
+    <CultivarPicker
+      adds
+      label="Find a cultivar record"
+      hint="Type part of a name; common misspellings are found too."
+      value={null}
+      onChange={(c) => c && onIds([...ids, c.id])}
+      exclude={ids}
+    />
+  );
 }
 
 function zoneFitOf(hardiness: unknown, zone: string | null, container: boolean): ZoneFit | null {
@@ -146,10 +160,7 @@ function RecordColumn({
         )}
       </div>
       {fit && (
-        <div className="mt-3 text-sm">
-          <ZoneFitBadge fits={fit.fits} zone={zone} />
-          <p className="mt-1 text-ink-soft">{fit.reason}</p>
-        </div>
+        <ZoneFitNote fit={fit} zone={zone} className="mt-3 text-sm" />
       )}
       <div className="mt-auto flex flex-wrap items-center gap-3 pt-3">
         <Link to={`/cultivars/${record.cultivar.slug}`} className="font-bold">
@@ -246,7 +257,7 @@ function Comparison({ data, ids, onIds }: { data: CompareResponse; ids: number[]
         <details className="rounded-lg border border-rule bg-card p-4">
           <summary className="cursor-pointer font-bold text-moss">Add a third record</summary>
           <div className="mt-3">
-            <RecordPicker exclude={ids} onPick={(c) => onIds([...ids, c.id])} />
+            <AddRecordPicker ids={ids} onIds={onIds} />
           </div>
         </details>
       )}
@@ -272,7 +283,7 @@ export function ComparePage() {
             The <Link to="/finder">tree finder</Link> also offers look-alikes for each tree it suggests.
           </p>
           <div className="mt-4">
-            <RecordPicker exclude={ids} onPick={(c) => onIds([...ids, c.id])} />
+            <AddRecordPicker ids={ids} onIds={onIds} />
           </div>
         </Card>
       </Page>

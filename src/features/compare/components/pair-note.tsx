@@ -2,8 +2,8 @@ import { useId, useState } from 'react';
 import { Button } from '@/components/button';
 import { FormError } from '@/components/form-error';
 import { errorMessage } from '@/lib/api';
+import { notesHtmlToText, textToNotesHtml } from '@/lib/notes-text';
 import { useSavePairNote, type PairNote as PairNoteDto } from '../api/compare-api';
-import { noteHtmlToPlainText, plainTextToNoteHtml } from '../lib/pair-notes';
 
 /** Props of PairNote: one pair, its stored note (if any) and whether this reader may edit it. */
 export interface PairNoteProps {
@@ -34,7 +34,7 @@ export function PairNote({ aId, bId, title, note, canEdit }: PairNoteProps) {
           className="mt-2 space-y-3"
           onSubmit={(e) => {
             e.preventDefault();
-            save.mutate({ aId, bId, notesHtml: plainTextToNoteHtml(draft) }, { onSuccess: () => setDraft(null) });
+            save.mutate({ aId, bId, notesHtml: textToNotesHtml(draft) }, { onSuccess: () => setDraft(null) });
           }}
         >
           <label htmlFor={`${id}-t`} className="block font-bold">
@@ -70,7 +70,7 @@ export function PairNote({ aId, bId, title, note, canEdit }: PairNoteProps) {
             <p className="mt-2 text-ink-soft">No note for this pair yet.{canEdit ? '' : ' Authors of the club can add one.'}</p>
           )}
           {canEdit && (
-            <Button variant="secondary" size="sm" className="mt-3" onClick={() => setDraft(note?.notesHtml ? noteHtmlToPlainText(note.notesHtml) : '')}>
+            <Button variant="secondary" size="sm" className="mt-3" onClick={() => setDraft(note?.notesHtml ? notesHtmlToText(note.notesHtml) : '')}>
               {note?.notesHtml ? 'Edit the note' : 'Write a note'}
             </Button>
           )}

@@ -179,7 +179,7 @@ export function CultivarIndexPage() {
       {hasRole(me?.role, 'author') && (
         <p className="-mt-4 mb-6">
           <Link to="/cultivars/new" className={buttonClasses('secondary')}>
-            Propose a record
+            Propose a cultivar record
           </Link>
         </p>
       )}

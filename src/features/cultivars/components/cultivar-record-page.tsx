@@ -172,7 +172,7 @@ function RecordView({ record }: { record: CultivarFull }) {
                 ))}
               </ul>
             ) : (
-              <p className="mt-2 text-ink-soft">No misspellings recorded.</p>
+              <p className="mt-2 text-ink-soft">No name variants recorded.</p>
             )}
             <p className="mt-2 text-sm text-ink-soft">Search finds the tree by any of these; they are never shown as its name.</p>
           </section>

@@ -76,7 +76,7 @@ function StatusPanel({ record }: { record: CultivarFull }) {
         {record.status === 'approved'
           ? 'Approved: listed everywhere, and stops can link to it.'
           : record.status === 'proposed'
-            ? 'Waiting for approval: only you moderators and the proposer can see it.'
+            ? 'Waiting for approval: only moderators and the person who proposed it can see it.'
             : 'Retired: kept for old links, but no new stop can link to it.'}
       </p>
       <FormError message={status.error ? errorMessage(status.error) : null} />
@@ -101,7 +101,7 @@ function StatusPanel({ record }: { record: CultivarFull }) {
         onCancel={() => setConfirmRetire(false)}
         onConfirm={() => status.mutate('retire', { onSettled: () => setConfirmRetire(false) })}
       >
-        <p>It leaves the index, the glossary and search. Stops that link to it keep their link. You can reinstate it later.</p>
+        <p>It leaves the list of cultivar records, the glossary and search. Stops that link to it keep their link. You can reinstate it later.</p>
       </ConfirmDialog>
     </Panel>
   );
@@ -168,7 +168,7 @@ function VariantsPanel({ record }: { record: CultivarFull }) {
   };
   const serverError = isApiError(add.error) ? (add.error.fields.text ?? add.error.message) : add.error ? errorMessage(add.error) : undefined;
   return (
-    <Panel title="Misspellings and mishearings">
+    <Panel title="Name variants (misspellings and mishearings)">
       {record.variants.length ? (
         <ul className="divide-y divide-rule rounded-md border border-rule">
           {record.variants.map((v) => (
@@ -185,7 +185,7 @@ function VariantsPanel({ record }: { record: CultivarFull }) {
       )}
       {remove.error != null && <p role="alert" className="mt-2 text-sm font-bold text-maple">{errorMessage(remove.error)}</p>}
       <form onSubmit={submit} className="mt-3 flex flex-wrap items-end gap-3" noValidate>
-        <TextField label="Add a variant" name="text" value={text} onChange={(e) => setText(e.target.value)} error={error ?? serverError} className="min-w-[12rem] flex-1" hint="As it was written or heard, e.g. “Sora no hane”." autoComplete="off" />
+        <TextField label="Add a name variant" name="text" value={text} onChange={(e) => setText(e.target.value)} error={error ?? serverError} className="min-w-[12rem] flex-1" hint="As it was written or heard, e.g. “Sora no hane”." autoComplete="off" />
         <Button type="submit" variant="secondary" busy={add.isPending}>
           Add
         </Button>

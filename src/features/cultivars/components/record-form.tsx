@@ -20,6 +20,7 @@ import { CultivarName } from '@/components/cultivar-name';
 import { FormError } from '@/components/form-error';
 import { TextField } from '@/components/text-field';
 import { errorMessage, isApiError } from '@/lib/api';
+import { notesHaveFormatting, notesHtmlToText, textToNotesHtml } from '@/lib/notes-text';
 import {
   BARK_LABELS,
   CONTAINER_LABELS,
@@ -31,7 +32,6 @@ import {
   SUN_LABELS,
 } from '@/lib/trait-words';
 import { EMPTY_NAME, nameInputOf, nameProblemsByField, namePreview, type NameFormValues } from '../lib/name-form';
-import { notesHaveFormatting, notesHtmlToText, textToNotesHtml } from '../lib/notes-text';
 import { colourField, fieldSourceOf, heightForForm, traitsFromForm } from '../lib/trait-form';
 
 const inputClass = 'mt-1 block w-full rounded-md border bg-card px-3 py-2 text-base font-normal';

@@ -5,7 +5,7 @@ import type { UnitSystem } from '@shared/units';
 import { Button } from '@/components/button';
 import { CultivarName, FictionalMark } from '@/components/cultivar-name';
 import { Loading } from '@/components/spinner';
-import { ZoneFitBadge } from '@/components/zone-fit-badge';
+import { ZoneFitNote } from '@/components/zone-fit-badge';
 import { errorMessage } from '@/lib/api';
 import { clockText, tourMomentHref } from '@/lib/tour-moment';
 import { useLookalikes, type FinderCandidate } from '../api/finder-api';
@@ -88,7 +88,7 @@ export function CandidateCard({ candidate: c, rank, answers, system, zone }: Can
         <div className="h-2.5 flex-1 overflow-hidden rounded-full bg-bark-wash" aria-hidden="true">
           <div className="h-full rounded-full bg-moss" style={{ width: `${pct}%` }} />
         </div>
-        <span className="shrink-0 font-ui text-sm font-bold text-moss-deep tabular-nums">{pct}% match</span>
+        <span className="shrink-0 font-ui text-sm font-bold text-moss-deep tabular-nums">fits your answers: {pct}%</span>
       </div>
 
       {chips.length > 0 && (
@@ -106,16 +106,7 @@ export function CandidateCard({ candidate: c, rank, answers, system, zone }: Can
       {unknown.length > 0 && <p className="mt-2 text-sm text-ink-soft">Not on record, so not counted: {unknown.join(', ')}.</p>}
 
       {c.fit && (
-        <div className="mt-3 text-sm">
-          <ZoneFitBadge fits={c.fit.fits} zone={zone} />
-          <p className="mt-1 text-ink-soft">{c.fit.reason}</p>
-          {c.fit.caution && (
-            <p className="mt-1 rounded-md border-l-4 border-ochre bg-ochre-wash px-3 py-1.5 text-ink">
-              <strong>Take care: </strong>
-              {c.fit.caution}
-            </p>
-          )}
-        </div>
+        <ZoneFitNote fit={c.fit} zone={zone} className="mt-3 text-sm" />
       )}
 
       {c.moments.length > 0 ? (

@@ -57,7 +57,7 @@ function WordPicker({ text, onPick }: { text: string; onPick: (words: string) =>
 }
 
 /**
- * "Flag a name": a reader marks the words a caption got wrong and picks the record they should
+ * "Flag a misspelt name": a reader marks the words a caption got wrong and picks the record they should
  * name; a moderator then reviews the spelling fix. Built on the native <dialog> (focus kept
  * inside, Escape closes, focus returns to the opener). Any transcript or caption list can mount it.
  */

@@ -11,6 +11,7 @@ import { Page } from '@/components/page';
 import { Pager } from '@/components/pager';
 import { Loading, Spinner } from '@/components/spinner';
 import { errorMessage } from '@/lib/api';
+import { positiveIntParam } from '@/lib/route-params';
 import { clockText, tourMomentHref } from '@/lib/tour-moment';
 import { useAcceptFix, useDeclineFix, useFix, useFixes, useOpenFixPreview, useRunDetection, useUndoFix } from '../api/spelling-api';
 import { buildPreview } from '../lib/change-preview';
@@ -21,10 +22,6 @@ const TAB_LABELS: Record<SpellingFixStatusName, string> = { open: 'To review', a
 
 function statusOf(raw: string | null): SpellingFixStatusName {
   return (SPELLING_FIX_STATUSES as readonly string[]).includes(raw ?? '') ? (raw as SpellingFixStatusName) : 'open';
-}
-
-function positive(raw: string | null): number | null {
-  return raw && /^\d{1,9}$/.test(raw) && Number(raw) >= 1 ? Number(raw) : null;
 }
 
 function dayText(iso: string | null): string {
@@ -59,7 +56,7 @@ function DetectionPanel() {
   return (
     <div className="flex flex-wrap items-start gap-3">
       <Button variant="secondary" busy={detect.isPending} onClick={() => detect.mutate()}>
-        Run detection
+        Scan captions for misspelt names
       </Button>
       <div className="min-w-0 flex-1">
         {detect.data && (
@@ -86,7 +83,7 @@ function QueueTable({ rows, status, selected, onSelect }: { rows: SpellingFixRow
           <tr>
             <th scope="col" className="px-3 py-2">Words in the captions</th>
             <th scope="col" className="px-3 py-2">Suggested name</th>
-            <th scope="col" className="px-3 py-2">{open ? 'Occurrences' : 'Captions changed'}</th>
+            <th scope="col" className="px-3 py-2">{open ? 'Times in captions' : 'Captions changed'}</th>
             <th scope="col" className="px-3 py-2">Tours affected</th>
             <th scope="col" className="px-3 py-2">Proposed by</th>
             <th scope="col" className="px-3 py-2">{open ? 'Waiting' : 'Decided'}</th>
@@ -102,7 +99,7 @@ function QueueTable({ rows, status, selected, onSelect }: { rows: SpellingFixRow
               <td data-label="Suggested name" className={cell}>
                 <span>‘{r.suggestion.epithet}’</span>
               </td>
-              <td data-label={open ? 'Occurrences' : 'Captions changed'} className={`${cell} tabular-nums`}>
+              <td data-label={open ? 'Times in captions' : 'Captions changed'} className={`${cell} tabular-nums`}>
                 {open ? r.occurrences : r.changedCues}
               </td>
               <td data-label="Tours affected" className={cell}>
@@ -385,8 +382,8 @@ function FixDetailPanel({ id, onResult }: { id: number; onResult: (message: stri
 export function SpellingQueuePage() {
   const [params, setParams] = useSearchParams();
   const status = statusOf(params.get('status'));
-  const page = positive(params.get('page')) ?? 1;
-  const selected = positive(params.get('fix'));
+  const page = positiveIntParam(params.get('page')) ?? 1;
+  const selected = positiveIntParam(params.get('fix'));
   const fixes = useFixes(status, page);
   const [result, setResult] = useState<string | null>(null);
 

@@ -42,7 +42,7 @@ function CueList({ tourId, trackId }: { tourId: number; trackId: number }) {
               <svg viewBox="0 0 20 20" className="size-4 text-maple" aria-hidden="true">
                 <path d="M5 17V3m0 1h9l-2 3.5L14 11H5" fill="none" stroke="currentColor" strokeWidth="1.8" strokeLinejoin="round" strokeLinecap="round" />
               </svg>
-              Flag a name
+              Flag a misspelt name
             </button>
           </li>
         ))}
@@ -53,7 +53,7 @@ function CueList({ tourId, trackId }: { tourId: number; trackId: number }) {
 }
 
 /**
- * /tours/:tourId/names — every caption of a tour with a "Flag a name" action on each, so readers
+ * /tours/:tourId/names — every caption of a tour with a "Flag a misspelt name" action on each, so readers
  * can report a misspelt cultivar name (select the words first to have them filled in).
  */
 export function TourNamesPage({ tourId }: { tourId: number }) {
@@ -92,7 +92,7 @@ export function TourNamesPage({ tourId }: { tourId: number }) {
     <Page
       title={`Names said in “${tour.data.title}”`}
       width="medium"
-      intro="Every caption of the tour. Spotted a cultivar name spelt wrong? Select the words (or not) and press “Flag a name”: a moderator checks it and corrects it in every tour at once."
+      intro="Every caption of the tour. Spotted a cultivar name spelt wrong? Select the words and press “Flag a misspelt name”: a moderator checks it and corrects it in every tour at once."
     >
       <p className="-mt-4 mb-6">
         <Link to={`/tours/${tourId}`}>Back to the tour</Link>

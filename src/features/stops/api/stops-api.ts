@@ -102,12 +102,12 @@ export function useDeleteStop(tourId: number) {
   return useMutation({ mutationFn: (stopId: number) => deleteStop(stopId), onSuccess: refresh });
 }
 
-/** "Place keyframes at stop starts". */
+/** "Prepare the video again for exact jumps": a new transcode with keyframes at the stop starts. */
 export function usePlaceKeyframes(tourId: number) {
   return useMutation({ mutationFn: () => placeKeyframes(tourId) });
 }
 
-/** "Propose a new record". */
+/** "Propose a new cultivar record". */
 export function useProposeRecord() {
   return useMutation({ mutationFn: proposeRecord });
 }

@@ -51,7 +51,7 @@ export function ProposeRecordForm({ typed, onDone, onCancel }: ProposeRecordForm
   return (
     <div role="group" aria-labelledby={`${id}-title`} onKeyDown={onEnter} className="space-y-3 rounded-md border border-rule bg-paper p-4">
       <h4 id={`${id}-title`} className="font-bold">
-        Propose a new record
+        Propose a new cultivar record
       </h4>
       <p className="text-sm text-ink-soft">
         Write the name the way the record should print it. A moderator checks new records before stops can link to them; until then the stop stays

@@ -190,7 +190,7 @@ export function RecordCombobox({ label, value, onChange, onPropose, error }: Rec
                     <FictionalMark record={option.record} />
                   </>
                 )}
-                {option.kind === 'propose' && <span>Propose a new record{text.trim() ? ` for “${text.trim()}”` : ''}…</span>}
+                {option.kind === 'propose' && <span>Propose a new cultivar record{text.trim() ? ` for “${text.trim()}”` : ''}…</span>}
               </li>
             ))}
           </ul>

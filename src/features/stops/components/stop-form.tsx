@@ -70,7 +70,7 @@ export function StopForm({ heading, initial, durationMs, playheadMs, submitLabel
           Title <span className="font-normal text-ink-soft">(optional)</span>
         </label>
         <p id={`${id}-title-hint`} className="text-sm text-ink-soft">
-          Shown on the trail and in the chapters; without one, the record’s name is used.
+          Shown on the trail and in the player’s list of stops; without one, the record’s name is used.
         </p>
         <input
           id={`${id}-title`}

@@ -224,22 +224,22 @@ function KeyframesOffer({ tourId, count }: { tourId: number; count: number }) {
   return (
     <section aria-labelledby="keyframes-heading" className="rounded-md border-l-4 border-bark bg-bark-wash p-4">
       <h3 id="keyframes-heading" className="font-bold">
-        Place keyframes at stop starts?
+        Make jumps land exactly on each stop?
       </h3>
       <p className="mt-1 text-sm">
-        A jump to a stop lands on the nearest keyframe at or before its start, which can be a moment early. Preparing the video again with a keyframe at each of the{' '}
+        Right now a jump to a stop can start a moment early, because a video can only begin playing at certain frames. Preparing the video again for the{' '}
         {count} stop start{count === 1 ? '' : 's'} makes every jump land on the stop’s first frame. It takes about as long as the first preparation; viewers keep
         the current video until the new one is ready.
       </p>
       {place.isSuccess ? (
         <div className="mt-3">
           <FormSuccess>
-            <p>Queued. The video is being prepared again with keyframes at the stop starts; the edit page shows its progress.</p>
+            <p>Queued. The video is being prepared again for exact jumps; the edit page shows its progress.</p>
           </FormSuccess>
         </div>
       ) : (
         <Button size="sm" className="mt-3" busy={place.isPending} onClick={() => place.mutate()}>
-          Place keyframes at stop starts
+          Prepare the video again for exact jumps
         </Button>
       )}
       <div className="mt-2">

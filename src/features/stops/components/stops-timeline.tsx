@@ -1,9 +1,10 @@
 import { memo, useRef, type KeyboardEvent, type PointerEvent } from 'react';
 import type { StopDto } from '@shared/schemas/stops';
 import { formatTimeInput } from '@/lib/time-input';
+import { clockText } from '@/lib/tour-moment';
 import { useStops } from '../api/stops-api';
 import { stopIndexAt } from '../lib/stop-draft';
-import { msAtFraction, percentAt, scaleLabel, scaleMarks } from '../lib/timeline-scale';
+import { msAtFraction, percentAt, scaleMarks } from '../lib/timeline-scale';
 
 type Range = { startMs: number; endMs: number };
 
@@ -138,7 +139,7 @@ export function StopsTimeline({ tourId, durationMs, playheadMs, cues, seek }: St
             className={`absolute ${i === 0 ? '' : i === all.length - 1 && percentAt(ms, durationMs) > 92 ? '-translate-x-full' : '-translate-x-1/2'}`}
             style={{ left: `${percentAt(ms, durationMs)}%` }}
           >
-            {scaleLabel(ms)}
+            {clockText(ms)}
           </span>
         ))}
       </div>

@@ -27,12 +27,3 @@ export function scaleMarks(durationMs: number, maxLabels = 8): number[] {
   for (let t = 0; t <= seconds + 1e-9; t += step) marks.push(Math.round(t * 1000));
   return marks;
 }
-
-/** "0:05", "1:30", "1:02:00": the scale's labels (whole seconds). */
-export function scaleLabel(ms: number): string {
-  const total = Math.round(ms / 1000);
-  const h = Math.floor(total / 3600);
-  const m = Math.floor((total % 3600) / 60);
-  const s = String(total % 60).padStart(2, '0');
-  return h > 0 ? `${h}:${String(m).padStart(2, '0')}:${s}` : `${m}:${s}`;
-}

@@ -34,7 +34,7 @@ export function KeyboardHelp({ open, onClose }: { open: boolean; onClose: () => 
     >
       <div className="p-6">
         <h2 id={titleId} className="text-xl text-moss-deep">
-          Keyboard keys
+          Keyboard shortcuts
         </h2>
         <p className="mt-2 text-sm text-ink-soft">
           The tour’s keys work while the video, the trail, the tree card or the transcript has the focus, and never while you type in a box. In the transcript, ↑ and ↓ move between lines.

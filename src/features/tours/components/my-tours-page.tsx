@@ -8,8 +8,9 @@ import { Page } from '@/components/page';
 import { Pager } from '@/components/pager';
 import { Loading } from '@/components/spinner';
 import { errorMessage } from '@/lib/api';
+import { clockText } from '@/lib/tour-moment';
 import { isBusy, useMyTours, useRetranscode } from '../api/tours-api';
-import { formatClock, formatDay, timeLeftText } from '../lib/media-format';
+import { formatDay, timeLeftText } from '../lib/media-format';
 import { pageFromParams } from '../lib/page-param';
 import { ProgressBar } from './progress-bar';
 import { TourPoster } from './tour-poster';
@@ -63,7 +64,7 @@ function TourRow({ tour }: { tour: TourDto }) {
         </h2>
         <div className="mt-1 flex flex-wrap items-center gap-x-3 gap-y-1 text-sm text-ink-soft">
           <TourStateBadge state={tour.state} job={tour.job} />
-          {tour.durationMs != null && <span className="font-ui tabular-nums">{formatClock(tour.durationMs / 1000)}</span>}
+          {tour.durationMs != null && <span className="font-ui tabular-nums">{clockText(tour.durationMs)}</span>}
           {updated && <span>changed {updated}</span>}
         </div>
         <StateDetail tour={tour} />

@@ -1,7 +1,8 @@
 import type { WatchStop } from '@shared/schemas/watch';
 import { CultivarName } from '@/components/cultivar-name';
 import { MomentThumb } from '@/components/moment-thumb';
-import { durationInWords, formatClock } from '../lib/media-format';
+import { clockText } from '@/lib/tour-moment';
+import { durationInWords } from '../lib/media-format';
 import { stopName } from '../lib/watch-links';
 
 /**
@@ -31,7 +32,7 @@ export function StopsList({ stops, currentIndex, onGo }: { stops: readonly Watch
                   <span className="font-ui">{i + 1}.</span> {stop.cultivar ? <CultivarName record={stop.cultivar} /> : stopName({ number: i + 1, name: null, title: stop.title })}
                 </span>
                 <span className="block font-ui text-xs text-ink-soft tabular-nums">
-                  <span aria-hidden="true">{formatClock(seconds)}</span>
+                  <span aria-hidden="true">{clockText(stop.startMs)}</span>
                   <span className="sr-only">at {durationInWords(seconds)}</span>
                   {current && <span className="ml-2 font-bold text-moss-deep">Playing now</span>}
                 </span>

@@ -1,6 +1,7 @@
 import { Link } from 'react-router';
 import type { TourDto } from '@shared/schemas/tours';
-import { durationInWords, formatClock, formatDay } from '../lib/media-format';
+import { clockText } from '@/lib/tour-moment';
+import { durationInWords, formatDay } from '../lib/media-format';
 import { TourPoster } from './tour-poster';
 
 /**
@@ -8,17 +9,17 @@ import { TourPoster } from './tour-poster';
  * garden, author (a link of its own to their page, above the card's link) and filming date.
  */
 export function TourCard({ tour, showAuthor = true, headingLevel = 2 }: { tour: TourDto; showAuthor?: boolean; headingLevel?: 2 | 3 }) {
-  const seconds = tour.durationMs != null ? tour.durationMs / 1000 : null;
+  const ms = tour.durationMs;
   const filmed = formatDay(tour.filmedOn);
   const Heading = headingLevel === 2 ? 'h2' : 'h3';
   return (
     <li className="group relative overflow-hidden rounded-lg border border-rule bg-card shadow-leaf transition-shadow focus-within:shadow-none hover:border-edge">
       <div className="relative">
         <TourPoster url={tour.posterUrl} />
-        {seconds != null && (
+        {ms != null && (
           <span className="absolute right-2 bottom-2 rounded bg-ink/85 px-1.5 py-0.5 font-ui text-xs font-semibold text-card tabular-nums">
-            <span aria-hidden="true">{formatClock(seconds)}</span>
-            <span className="sr-only">{durationInWords(seconds)}</span>
+            <span aria-hidden="true">{clockText(ms)}</span>
+            <span className="sr-only">{durationInWords(ms / 1000)}</span>
           </span>
         )}
       </div>

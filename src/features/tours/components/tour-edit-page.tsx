@@ -4,10 +4,8 @@ import { updateTourInput, type TourDto } from '@shared/schemas/tours';
 import { Button, buttonClasses } from '@/components/button';
 import { Card } from '@/components/card';
 import { ConfirmDialog } from '@/components/confirm-dialog';
-import { ErrorState } from '@/components/error-state';
 import { FormError, FormSuccess } from '@/components/form-error';
 import { Page, useDocumentTitle } from '@/components/page';
-import { Loading } from '@/components/spinner';
 import { TextField } from '@/components/text-field';
 import { errorMessage, isApiError } from '@/lib/api';
 import { checkForm, focusFirstError, formValues, type FieldErrors } from '@/lib/form';
@@ -16,7 +14,7 @@ import { uploadReplacementVideo } from '../api/upload-api';
 import { useVideoUpload } from '../hooks/use-video-upload';
 import { changedDetails, detailsInputFrom } from '../lib/details';
 import { formatDay } from '../lib/media-format';
-import { TourNotFound } from './tour-not-found';
+import { TourLoadState } from './tour-load-state';
 import { TourStateBadge } from './tour-state-badge';
 import { TranscodePanel } from './transcode-panel';
 import { UploadStatus } from './upload-status';
@@ -305,21 +303,7 @@ export function TourEditPage({ tourId }: { tourId: number }) {
   const data = tour.data;
   useTourJob(tourId, Boolean(data?.canEdit && isBusy(data.state, data.job)));
 
-  if (tour.isPending) {
-    return (
-      <div className="mx-auto max-w-6xl px-4 sm:px-6">
-        <Loading label="Loading the tour…" />
-      </div>
-    );
-  }
-  if (tour.isError) {
-    if (isApiError(tour.error) && tour.error.status === 404) return <TourNotFound />;
-    return (
-      <div className="mx-auto max-w-3xl px-4 sm:px-6">
-        <ErrorState title="The tour could not be loaded" error={tour.error} onRetry={() => void tour.refetch()} />
-      </div>
-    );
-  }
+  if (!tour.isSuccess) return <TourLoadState query={tour} width="max-w-6xl" />;
   if (!tour.data.canEdit) {
     return (
       <Page title="You cannot edit this tour" width="medium">

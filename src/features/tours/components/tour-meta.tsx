@@ -1,12 +1,13 @@
 import type { ReactNode } from 'react';
 import { Link } from 'react-router';
 import type { TourDto } from '@shared/schemas/tours';
-import { durationInWords, formatClock, formatDay } from '../lib/media-format';
+import { clockText } from '@/lib/tour-moment';
+import { durationInWords, formatDay } from '../lib/media-format';
 
 /** Garden, author (linked to their page), date filmed and length on one line, leaving out what the author has not given. */
 export function TourMeta({ tour, showAuthor = true, className = '' }: { tour: TourDto; showAuthor?: boolean; className?: string }) {
   const filmed = formatDay(tour.filmedOn);
-  const seconds = tour.durationMs != null ? tour.durationMs / 1000 : null;
+  const ms = tour.durationMs;
   const parts: { key: string; node: ReactNode }[] = [];
   if (tour.garden) parts.push({ key: 'garden', node: tour.garden });
   if (showAuthor && tour.author.displayName) {
@@ -20,15 +21,15 @@ export function TourMeta({ tour, showAuthor = true, className = '' }: { tour: To
     });
   }
   if (filmed) parts.push({ key: 'filmed', node: <>filmed {filmed}</> });
-  if (seconds != null)
+  if (ms != null)
     parts.push({
       key: 'length',
       node: (
         <>
           <span aria-hidden="true" className="font-ui tabular-nums">
-            {formatClock(seconds)}
+            {clockText(ms)}
           </span>
-          <span className="sr-only">{durationInWords(seconds)}</span>
+          <span className="sr-only">{durationInWords(ms / 1000)}</span>
         </>
       ),
     });

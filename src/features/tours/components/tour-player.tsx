@@ -5,7 +5,8 @@ import { useEffect, useId, useRef, useState, type KeyboardEvent as ReactKeyboard
 import { createPortal } from 'react-dom';
 import type { Rendition } from '@shared/schemas/tours';
 import type { WatchResponse } from '@shared/schemas/watch';
-import { formatClock } from '../lib/media-format';
+import { sheetTileStyle } from '@/lib/thumb-style';
+import { clockText } from '@/lib/tour-moment';
 import type { PlayerController } from '../lib/player-controller';
 import { nextSpeed, PLAYBACK_SPEEDS, playerActionForKey, seekTarget, speedLabel, type PlayerAction } from '../lib/player-keys';
 import { pickRendition } from '../lib/renditions';
@@ -78,23 +79,17 @@ interface Preview {
 
 function ThumbPreview({ preview }: { preview: Preview }) {
   const { tile } = preview;
-  const scale = Math.min(1, PREVIEW_WIDTH / tile.width);
-  const w = Math.round(tile.width * scale);
-  const h = Math.round(tile.height * scale);
+  const scale = Math.min(1, PREVIEW_WIDTH / tile.w);
+  const w = Math.round(tile.w * scale);
+  const h = Math.round(tile.h * scale);
   return (
     <div
       className="gw-thumb-preview"
       aria-hidden="true"
-      style={{
-        left: preview.left - w / 2,
-        width: w,
-        height: h,
-        backgroundImage: `url("${tile.sheetUrl}")`,
-        backgroundSize: `${tile.sheetWidth * scale}px ${tile.sheetHeight * scale}px`,
-        backgroundPosition: `${-tile.x * scale}px ${-tile.y * scale}px`,
-      }}
+      // The tile fills the whole box, its edge under the frame's border.
+      style={{ ...sheetTileStyle(tile), backgroundOrigin: 'border-box', left: preview.left - w / 2, width: w, height: h }}
     >
-      <span>{formatClock(preview.seconds)}</span>
+      <span>{clockText(preview.seconds * 1000)}</span>
     </div>
   );
 }
@@ -125,7 +120,7 @@ function useThumbPreview(player: Player | null, strip: ThumbStrip | null) {
       const seconds = fraction * duration;
       const tile = thumbTileAt(strip, seconds);
       if (!tile) return setPreview(null);
-      const half = Math.min(PREVIEW_WIDTH, tile.width) / 2 + 4;
+      const half = Math.min(PREVIEW_WIDTH, tile.w) / 2 + 4;
       const left = Math.min(box.width - half, Math.max(half, event.clientX - box.left));
       setPreview({ tile, seconds, left });
     };
@@ -316,7 +311,7 @@ export function TourPlayer({
       case 'seek': {
         const to = seekTarget(player.currentTime() ?? 0, action.by, player.duration());
         player.currentTime(to);
-        say(`${action.by < 0 ? 'Back' : 'Forward'} to ${formatClock(to)}`);
+        say(`${action.by < 0 ? 'Back' : 'Forward'} to ${clockText(to * 1000)}`);
         break;
       }
       case 'jump': {

@@ -5,7 +5,7 @@ const labels: Record<TourState, string> = {
   draft: 'Draft',
   processing: 'Preparing video',
   ready: 'Ready, not published',
-  failed: 'Video failed',
+  failed: 'Video not prepared',
   published: 'Published',
 };
 const tones: Record<TourState, BadgeTone> = { draft: 'plain', processing: 'ochre', ready: 'bark', failed: 'maple', published: 'moss' };

@@ -2,7 +2,8 @@ import { useEffect, useMemo, useRef, useState } from 'react';
 import type { WatchStop } from '@shared/schemas/watch';
 import { CultivarName } from '@/components/cultivar-name';
 import { MomentThumb } from '@/components/moment-thumb';
-import { durationInWords, formatClock } from '../lib/media-format';
+import { clockText } from '@/lib/tour-moment';
+import { durationInWords } from '../lib/media-format';
 import { trailLayout, walkedPath } from '../lib/trail-layout';
 import { stopName } from '../lib/watch-links';
 
@@ -38,11 +39,11 @@ function Signpost({ stop, index, mode }: { stop: WatchStop | null; index: number
               <span className="font-ui">Stop {index + 1}</span> · {stop.cultivar ? <CultivarName record={stop.cultivar} /> : stopName(namingOf(stop, index))}
             </p>
             <p className="font-ui text-ink-soft tabular-nums">
-              {formatClock(stop.startMs / 1000)}–{formatClock(stop.endMs / 1000)}
+              {clockText(stop.startMs)}–{clockText(stop.endMs)}
             </p>
           </>
         ) : (
-          <p className="text-ink-soft">Pick a stone on the trail to jump to that tree.</p>
+          <p className="text-ink-soft">Pick a stop on the trail to jump to that tree.</p>
         )}
       </div>
     </div>

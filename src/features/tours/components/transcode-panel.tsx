@@ -2,8 +2,9 @@ import type { TourDto } from '@shared/schemas/tours';
 import { Button } from '@/components/button';
 import { FormError } from '@/components/form-error';
 import { errorMessage } from '@/lib/api';
+import { clockText } from '@/lib/tour-moment';
 import { isBusy, useRetranscode } from '../api/tours-api';
-import { durationInWords, formatBytes, formatClock, timeLeftText } from '../lib/media-format';
+import { durationInWords, formatBytes, timeLeftText } from '../lib/media-format';
 import { ProgressBar } from './progress-bar';
 
 function Versions({ tour }: { tour: TourDto }) {
@@ -30,7 +31,7 @@ export function TranscodePanel({ tour }: { tour: TourDto }) {
   const retry = useRetranscode();
   const job = tour.job;
   const busy = isBusy(tour.state, job);
-  const duration = tour.durationMs != null ? tour.durationMs / 1000 : null;
+  const durationMs = tour.durationMs;
 
   let body;
   if (busy) {
@@ -84,10 +85,10 @@ export function TranscodePanel({ tour }: { tour: TourDto }) {
       <>
         <h2 className="text-lg">Video ready</h2>
         <p className="mt-1">
-          {duration != null && (
+          {durationMs != null && (
             <>
-              Length <span className="font-ui tabular-nums">{formatClock(duration)}</span>
-              <span className="sr-only"> ({durationInWords(duration)})</span>.{' '}
+              Length <span className="font-ui tabular-nums">{clockText(durationMs)}</span>
+              <span className="sr-only"> ({durationInWords(durationMs / 1000)})</span>.{' '}
             </>
           )}
           {tour.state === 'published' ? 'Viewers can watch it now.' : 'Publish the tour when its details are in order.'}

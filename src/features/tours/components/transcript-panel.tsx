@@ -5,9 +5,10 @@ import { Button } from '@/components/button';
 import { MarkedText } from '@/components/marked-text';
 import { Loading } from '@/components/spinner';
 import { errorMessage } from '@/lib/api';
+import { clockText } from '@/lib/tour-moment';
 import { useTrackCues } from '../api/watch-api';
 import { REDUCED_MOTION, useMediaQuery } from '../hooks/use-media-query';
-import { durationInWords, formatClock } from '../lib/media-format';
+import { durationInWords } from '../lib/media-format';
 import type { PlayheadClock } from '../lib/playhead-clock';
 import { activeCueIndex, findInLines, stepMatch, transcriptLine, type TranscriptMatch } from '../lib/transcript';
 
@@ -178,7 +179,7 @@ export function TranscriptPanel({ tourId, captions, clock, onSeek }: TranscriptP
                   className={`flex w-full gap-3 rounded px-2 py-1.5 text-left hover:bg-bark-wash ${current ? 'bg-moss-wash font-bold text-moss-deep shadow-[inset_3px_0_0_var(--color-moss)]' : ''} ${focused ? 'outline-2 outline-ochre' : ''}`}
                 >
                   <span className="w-12 shrink-0 pt-0.5 font-ui text-xs text-ink-soft tabular-nums">
-                    <span aria-hidden="true">{formatClock(line.startMs / 1000)}</span>
+                    <span aria-hidden="true">{clockText(line.startMs)}</span>
                     <span className="sr-only">At {durationInWords(line.startMs / 1000)}: </span>
                   </span>
                   <span>

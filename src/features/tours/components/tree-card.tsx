@@ -4,9 +4,9 @@ import type { TreeCard as TreeCardData, WatchStop } from '@shared/schemas/watch'
 import { Button } from '@/components/button';
 import { CultivarName, FictionalMark } from '@/components/cultivar-name';
 import { HearItButton } from '@/components/hear-it-button';
-import { ZoneFitBadge } from '@/components/zone-fit-badge';
+import { ZoneFitNote } from '@/components/zone-fit-badge';
 import { useReaderPrefs } from '@/features/preferences/hooks/use-reader-prefs';
-import { formatClock } from '../lib/media-format';
+import { clockText } from '@/lib/tour-moment';
 import { cardZoneFit, hardinessText, SEASON_WORDS, sizeLines } from '../lib/tree-card-view';
 import { stopName } from '../lib/watch-links';
 
@@ -120,13 +120,10 @@ function RecordCard({ card }: { card: TreeCardData }) {
           <Row label="Hardiness (USDA zones)">
             <p>{hardinessText(card.hardiness)}</p>
             {fit ? (
-              <div className="mt-1 space-y-1">
-                <ZoneFitBadge fits={fit.fits} zone={prefs.zone} />
-                {fit.reason && <p className="text-sm text-ink-soft">{fit.reason}</p>}
-              </div>
+              <ZoneFitNote fit={fit} zone={prefs.zone} className="mt-1 text-sm" />
             ) : (
               <p className="mt-1 text-sm text-ink-soft">
-                <Link to="/finder">Set your zone</Link> to see whether it suits your garden.
+                Set your zone under <Link to="/finder">“My garden” in the tree finder</Link> to see whether it suits your garden.
               </p>
             )}
           </Row>
@@ -172,14 +169,14 @@ export function TreeCardPanel({ stops, currentIndex, nextIndex, onGo }: TreeCard
             <p className="mt-2">
               Next on the trail: stop {nextIndex! + 1},{' '}
               <strong>{next.cultivar ? <CultivarName record={next.cultivar} /> : stopName({ number: nextIndex! + 1, name: null, title: next.title })}</strong> at{' '}
-              <span className="font-ui tabular-nums">{formatClock(next.startMs / 1000)}</span>.
+              <span className="font-ui tabular-nums">{clockText(next.startMs)}</span>.
             </p>
             <Button variant="secondary" size="sm" className="mt-3" onClick={() => onGo(nextIndex!)}>
               Go to stop {nextIndex! + 1}
             </Button>
           </>
         ) : (
-          <p className="mt-2 text-ink-soft">That was the last tree on this walk. Pick a stop on the trail to see one again.</p>
+          <p className="mt-2 text-ink-soft">That was the last stop of this tour. Pick a stop on the trail to see one again.</p>
         )}
       </div>
     );
@@ -189,7 +186,7 @@ export function TreeCardPanel({ stops, currentIndex, nextIndex, onGo }: TreeCard
       <p className="font-ui text-sm text-ink-soft">
         Stop {currentIndex + 1} of {stops.length} ·{' '}
         <span className="tabular-nums">
-          {formatClock(stop.startMs / 1000)}–{formatClock(stop.endMs / 1000)}
+          {clockText(stop.startMs)}–{clockText(stop.endMs)}
         </span>
       </p>
       {stop.cultivar ? (

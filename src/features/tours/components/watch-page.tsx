@@ -3,14 +3,12 @@ import { Link, useSearchParams } from 'react-router';
 import type { TourDto } from '@shared/schemas/tours';
 import type { WatchResponse, WatchStop } from '@shared/schemas/watch';
 import { Button, buttonClasses } from '@/components/button';
-import { ErrorState } from '@/components/error-state';
 import { useDocumentTitle } from '@/components/page';
 import { Loading } from '@/components/spinner';
-import { isApiError } from '@/lib/api';
 import { useHeadMeta } from '@/lib/head-meta';
+import { clockText } from '@/lib/tour-moment';
 import { isBusy } from '../api/tours-api';
 import { useWatch } from '../api/watch-api';
-import { formatClock } from '../lib/media-format';
 import type { PlayerController } from '../lib/player-controller';
 import { playerActionForKey } from '../lib/player-keys';
 import { createPlayheadClock } from '../lib/playhead-clock';
@@ -22,7 +20,7 @@ import { Fold } from './fold';
 import { KeyboardHelp } from './keyboard-help';
 import { StopsList } from './stops-list';
 import { TourMeta } from './tour-meta';
-import { TourNotFound } from './tour-not-found';
+import { TourLoadState } from './tour-load-state';
 import { Trail } from './trail';
 import { TranscriptPanel } from './transcript-panel';
 import { TreeCardPanel } from './tree-card';
@@ -173,7 +171,7 @@ function WatchView({ data, stopId }: { data: WatchResponse; stopId: number | nul
     } else {
       const at = controller?.currentTime() ?? clock.get() / 1000;
       url = absoluteUrl(window.location.origin, momentPath(tour.id, at));
-      label = `the tour at ${formatClock(Math.floor(at))}`;
+      label = `the tour at ${clockText(Math.floor(at) * 1000)}`;
     }
     try {
       await navigator.clipboard.writeText(url);
@@ -203,7 +201,7 @@ function WatchView({ data, stopId }: { data: WatchResponse; stopId: number | nul
         Copy link to this stop
       </Button>
       <Button variant="quiet" size="sm" onClick={() => setHelpOpen(true)} aria-keyshortcuts="?">
-        Keyboard keys <kbd className="rounded border border-edge px-1 font-mono text-xs">?</kbd>
+        Keyboard shortcuts <kbd className="rounded border border-edge px-1 font-mono text-xs">?</kbd>
       </Button>
     </div>
   );
@@ -217,7 +215,7 @@ function WatchView({ data, stopId }: { data: WatchResponse; stopId: number | nul
           <p className="text-lg font-bold">{busy ? 'The video is still being prepared.' : tour.state === 'failed' ? 'The video could not be prepared.' : 'This tour has no video yet.'}</p>
           {tour.canEdit && (
             <Link to={`/tours/${tour.id}/edit`} className={buttonClasses('secondary', 'sm')}>
-              {busy ? 'See the progress' : 'Open the tour’s settings'}
+              {busy ? 'See the progress' : 'Edit the tour'}
             </Link>
           )}
         </div>
@@ -323,7 +321,7 @@ function WatchView({ data, stopId }: { data: WatchResponse; stopId: number | nul
           </div>
 
           <section aria-labelledby="transcript-heading" className="min-w-0 rounded-lg border border-rule bg-card p-4 lg:[grid-area:transcript]">
-            <Fold headingId="transcript-heading" title="Transcript" summary={captions.tracks.length ? 'Click a line to play from there' : 'No captions yet'}>
+            <Fold headingId="transcript-heading" title="Transcript" summary={captions.tracks.length ? 'Pick a line to play from there' : 'No captions yet'}>
               <TranscriptPanel tourId={tour.id} captions={captions} clock={clock} onSeek={(s) => controller?.seek(s)} />
             </Fold>
           </section>
@@ -338,6 +336,10 @@ function WatchView({ data, stopId }: { data: WatchResponse; stopId: number | nul
             ) : (
               <p className="mt-3 text-ink-soft">The author has not written a description yet.</p>
             )}
+            <p className="mt-4 text-sm text-ink-soft">
+              Tours can show pruning, ladders, heavy pots or digging. Follow local codes and product labels, check for buried cables and
+              pipes before you dig, and ask a licensed arborist about large trees.
+            </p>
           </section>
         </div>
       </article>
@@ -358,20 +360,6 @@ function WatchView({ data, stopId }: { data: WatchResponse; stopId: number | nul
  */
 export function WatchPage({ tourId, stopId = null }: { tourId: number; stopId?: number | null }) {
   const watch = useWatch(tourId);
-  if (watch.isPending) {
-    return (
-      <div className="mx-auto max-w-6xl px-4 sm:px-6">
-        <Loading label="Loading the tour…" />
-      </div>
-    );
-  }
-  if (watch.isError) {
-    if (isApiError(watch.error) && watch.error.status === 404) return <TourNotFound />;
-    return (
-      <div className="mx-auto max-w-3xl px-4 sm:px-6">
-        <ErrorState title="The tour could not be loaded" error={watch.error} onRetry={() => void watch.refetch()} />
-      </div>
-    );
-  }
+  if (!watch.isSuccess) return <TourLoadState query={watch} width="max-w-6xl" />;
   return <WatchView data={watch.data} stopId={stopId} />;
 }

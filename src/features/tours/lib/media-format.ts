@@ -32,21 +32,7 @@ export function uploadProgressText(sent: number, total: number): string {
   return `${formatBytes(sent)} of ${formatBytes(total)} · ${percentOf(sent, total)} %`;
 }
 
-/**
- * A media time as a clock: "0:07", "4:05", "1:02:03" (hours only when needed). Fractions of a
- * second are dropped, never rounded up, so the clock does not run ahead of the picture.
- */
-export function formatClock(totalSeconds: number): string {
-  if (!Number.isFinite(totalSeconds) || totalSeconds < 0) return '0:00';
-  const s = Math.floor(totalSeconds + 1e-6);
-  const hours = Math.floor(s / 3600);
-  const minutes = Math.floor((s % 3600) / 60);
-  const seconds = s % 60;
-  const ss = String(seconds).padStart(2, '0');
-  return hours > 0 ? `${hours}:${String(minutes).padStart(2, '0')}:${ss}` : `${minutes}:${ss}`;
-}
-
-/** The same clock in words for screen readers and titles: "4 minutes 5 seconds". */
+/** A time in words for screen readers and titles, "4 minutes 5 seconds" (the clock itself is `clockText`). */
 export function durationInWords(totalSeconds: number): string {
   const s = Math.max(0, Math.floor(totalSeconds + 1e-6));
   const parts: string[] = [];

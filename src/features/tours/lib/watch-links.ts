@@ -1,5 +1,4 @@
-import { startParam } from '@/lib/tour-moment';
-import { formatClock } from './media-format';
+import { clockText, startParam } from '@/lib/tour-moment';
 
 /** The tour page opened at a stop: it starts at the stop's first second with its tree card showing. */
 export function stopPath(tourId: number, stopId: number, atMs?: number | null): string {
@@ -48,7 +47,7 @@ export function watchTitle(tourTitle: string, stop: StopNaming | null): string {
 export function watchDescription(input: { tourTitle: string; garden: string; author: string; stop: (StopNaming & { startMs: number }) | null; stopCount: number }, max = 200): string {
   const where = input.garden ? ` in ${input.garden}` : '';
   const lead = input.stop
-    ? `Stop ${input.stop.number} at ${formatClock(input.stop.startMs / 1000)}: ${stopName(input.stop)}. `
+    ? `Stop ${input.stop.number} at ${clockText(input.stop.startMs)}: ${stopName(input.stop)}. `
     : '';
   const text = `${lead}A filmed garden tour by ${input.author}${where}, with ${input.stopCount} tree${input.stopCount === 1 ? '' : 's'} named on the trail: "${input.tourTitle}".`;
   if (text.length <= max) return text;

@@ -1,9 +1,10 @@
 /*
- * Record notes are stored as sanitised HTML. Moderators edit them here as plain paragraphs:
- * a blank line starts a new paragraph, a single line break stays a line break.
+ * Notes (of a cultivar record, of a pair side by side) are stored as sanitised HTML and edited in
+ * a plain text box as paragraphs: a blank line starts a new paragraph, a single line break stays a
+ * line break. A no-break space comes back as a plain one, since the text box cannot show it.
  */
 
-const ENTITIES: Record<string, string> = { amp: '&', lt: '<', gt: '>', quot: '"', apos: "'", nbsp: '\u00a0', '#39': "'" };
+const ENTITIES: Record<string, string> = { amp: '&', lt: '<', gt: '>', quot: '"', apos: "'", nbsp: ' ', '#39': "'" };
 
 function decodeEntities(s: string): string {
   return s.replace(/&(#x[0-9a-f]+|#\d+|[a-z]+|#39);/gi, (whole, name: string) => {
@@ -16,7 +17,7 @@ function decodeEntities(s: string): string {
 }
 
 function escapeHtml(s: string): string {
-  return s.replace(/&/g, '&amp;').replace(/</g, '&lt;').replace(/>/g, '&gt;').replace(/"/g, '&quot;');
+  return s.replace(/&/g, '&amp;').replace(/</g, '&lt;').replace(/>/g, '&gt;').replace(/"/g, '&quot;').replace(/'/g, '&#39;');
 }
 
 /** The notes as editable paragraphs: block ends become blank lines, <br> a line break, tags dropped. */
@@ -37,7 +38,10 @@ export function notesHtmlToText(html: string): string {
     .trim();
 }
 
-/** Paragraphs back to HTML: each block separated by a blank line becomes a <p>, text escaped. */
+/**
+ * Paragraphs back to HTML: each block separated by a blank line becomes a <p>, every character
+ * escaped (the server sanitises again); an empty text comes out as "".
+ */
 export function textToNotesHtml(text: string): string {
   return text
     .replace(/\r\n?/g, '\n')
