@@ -12,6 +12,7 @@
 import os from 'node:os';
 import { performance } from 'node:perf_hooks';
 import { likeContains } from '../server/db/like';
+import { RANK_WINDOW } from '../server/modules/search/caption-search';
 import { INNODB_DEFAULT_STOPWORDS } from '../server/modules/search/fulltext';
 import { SearchService } from '../server/modules/search/search.service';
 import { searchWords } from '../shared/search/text-fold';
@@ -83,7 +84,12 @@ try {
 
   // The caption lookup alone, against a LIKE '%…%' scan of the same cues with the same filter, order and cap.
   const plan = async (q: string) => search.captions.plan(searchWords(q));
+  const statsBefore = { ...search.captions.rankStats };
   const ftOnly = await time(captionWords, async (q) => search.captions.byWords(await plan(q)));
+  const settled = search.captions.rankStats.fromWindow - statsBefore.fromWindow;
+  const walked = search.captions.rankStats.newestToursFirst - statsBefore.newestToursFirst;
+  const walkedEarly = search.captions.rankStats.toursReadEarly - statsBefore.toursReadEarly;
+  const sortedAll = search.captions.rankStats.sortedAll - statsBefore.sortedAll;
   const likeScan = await time(captionWords, (q) =>
     ds.query(
       `SELECT c.id, c.text, COALESCE(t.filmed_on, DATE(t.published_at)) AS tourDate
@@ -112,6 +118,10 @@ try {
   if (ftFrequent) {
     row('  FULLTEXT, words in > 5% of cues', ftFrequent, ` (${new Set(frequent).size} such words, up to ${(Math.max(...frequent.map((w) => share.get(w)!)) * 100).toFixed(0)}% of cues)`);
   }
+  console.log(
+    `  how the ${settled + walked + sortedAll} lookups ranked: ${settled} from the first ${RANK_WINDOW} hits in relevance order, ` +
+      `${walked} also read the newest tours for a tie at the cut (${walkedEarly} of them beside the window, sized by an earlier search), ${sortedAll} sorted every hit`,
+  );
   console.log(`  ratio LIKE scan / FULLTEXT: p50 ${(likeScan.p50 / ftOnly.p50).toFixed(1)}×, p95 ${(likeScan.p95 / ftOnly.p95).toFixed(1)}×`);
   const captionP95 = results['caption word (FULLTEXT)']!.p95;
   console.log(`  target: caption search p95 < 30 ms — whole search ${captionP95.toFixed(1)} ms (${captionP95 < 30 ? 'met' : 'NOT met'}), caption lookup alone ${ftOnly.p95.toFixed(1)} ms (${ftOnly.p95 < 30 ? 'met' : 'NOT met'})`);

@@ -19,6 +19,17 @@ import {
 /** Most caption hits ranked per kind of lookup; the rest are counted as "more" (see `capped`). */
 export const MOMENT_CAP = 200;
 
+/**
+ * Full-text hits a ranked lookup first reads in the index's relevance order (see
+ * `CaptionSearch.ranked`), unless an earlier search with the same words showed how far it needs to
+ * read. Each hit read costs a row lookup (about 2–5 µs on the benchmark machine).
+ */
+export const RANK_WINDOW = 400;
+/** Furthest a second read of the stream goes to get past a tie (beyond it, other ways are cheaper). */
+const RANK_WINDOW_MAX = 5000;
+/** Lookups whose window size is remembered (oldest forgotten first). */
+const WINDOW_HINTS_MAX = 2000;
+
 /** A cue of a published tour that a search found. */
 export interface CueHit {
   cueId: number;
@@ -60,9 +71,49 @@ const SELECT = `SELECT c.id AS cueId, c.track_id AS trackId, ct.tour_id AS tourI
        c.end_ms AS endMs, %SCORE% AS score, COALESCE(t.filmed_on, DATE(t.published_at)) AS tourDate`;
 const ORDER = `ORDER BY score DESC, tourDate DESC, t.id DESC, c.start_ms ASC, c.id ASC`;
 
+/** How ranked lookups were answered (see `CaptionSearch.ranked`). */
+export interface RankStats {
+  /** From the first hits in the index's relevance order alone. */
+  fromWindow: number;
+  /** A long tie at the cut resolved by reading the newest tours' cues first. */
+  newestToursFirst: number;
+  /** Of those, how many had started reading the newest tours beside the window (a hint from an earlier search). */
+  toursReadEarly: number;
+  /** By sorting every hit. */
+  sortedAll: number;
+}
+
+/** A published caption track in the order ORDER ranks its tour. */
+interface TrackInOrder {
+  trackId: number;
+  tourId: number;
+  lang: string;
+  tourDate: string | null;
+}
+
 function dateString(d: string | Date | null): string | null {
   if (d == null) return null;
   return d instanceof Date ? d.toISOString().slice(0, 10) : String(d).slice(0, 10);
+}
+
+/** Hits read from whole tours, newest first: up to track index `next` (exclusive), about `cues` cues read. */
+interface ToursRead {
+  hits: CueHit[];
+  next: number;
+  cues: number;
+}
+
+/** A cue row as the ranked lookups read it, before its track is known. */
+interface CueRow {
+  cueId: number | string;
+  trackId: number | string;
+  startMs: number | string;
+  endMs: number | string;
+  score: number | string;
+}
+
+function trackHit(r: CueRow, track: TrackInOrder): CueHit {
+  return toHit({ ...r, tourId: track.tourId, lang: track.lang, tourDate: track.tourDate });
 }
 
 function toHit(r: Row): CueHit {
@@ -80,6 +131,55 @@ function toHit(r: Row): CueHit {
     cultivarIds: [],
     nameSpans: [],
   };
+}
+
+/** The order of ORDER in JavaScript, for hits of published tours (their date is never null there). */
+export function compareHits(a: CueHit, b: CueHit): number {
+  return (
+    b.score - a.score ||
+    compareDesc(a.tourDate, b.tourDate) ||
+    b.tourId - a.tourId ||
+    a.startMs - b.startMs ||
+    a.cueId - b.cueId
+  );
+}
+
+/** Descending, with null last (as ORDER BY … DESC puts NULL). */
+function compareDesc(a: string | null, b: string | null): number {
+  if (a === b) return 0;
+  if (a === null) return 1;
+  if (b === null) return -1;
+  return a < b ? 1 : -1;
+}
+
+/** What the first `window` hits, read in the index's order, say about the full ranking. */
+export type WindowOutcome =
+  /** Fewer than `window` were read: they are every hit. */
+  | 'every-hit'
+  /** Scores never fall behind and the last one read is below the `limit`-th kept: nothing unread can reach the answer. */
+  | 'settled'
+  /** As settled, except that the `limit`-th kept ties with the last one read: unread hits may share its score. */
+  | 'tie-runs-on'
+  /** Fewer than `limit` of those read were kept (most were in tours that are not public). */
+  | 'too-few-kept'
+  /** Scores rise somewhere: not the index's relevance order, so nothing is concluded from it. */
+  | 'unordered';
+
+/**
+ * Reads a window taken with `LIMIT window` in the index's order: `read` holds the scores of every
+ * row read, in that order; `kept` those of published tours, in the same order. The relevance order
+ * is checked, not assumed.
+ */
+export function windowOutcome(read: readonly { score: number }[], kept: readonly { score: number }[], limit: number, window: number): WindowOutcome {
+  if (read.length < window) return 'every-hit';
+  for (let i = 1; i < read.length; i++) if (read[i]!.score > read[i - 1]!.score) return 'unordered';
+  if (kept.length < limit) return 'too-few-kept';
+  return read[read.length - 1]!.score < kept[limit - 1]!.score ? 'settled' : 'tie-runs-on';
+}
+
+/** Scores of one tie: equal in the same snapshot; the tolerance only absorbs a change of corpus between two queries. */
+function sameScore(a: number, b: number): boolean {
+  return Math.abs(a - b) <= Math.abs(b) * 1e-6;
 }
 
 /**
@@ -123,8 +223,16 @@ function fallbackWhere(words: readonly string[]): { sql: string; params: string[
  */
 export class CaptionSearch {
   private limits: FulltextLimits | null = null;
+  /** Counts of how ranked lookups were answered since this object was made (the benchmark prints them). */
+  readonly rankStats: RankStats = { fromWindow: 0, newestToursFirst: 0, toursReadEarly: 0, sortedAll: 0 };
+  private cueStats: { cuesPerTrack: number; cues: number; at: number } | null = null;
+  /** How far each recent lookup needed to read: the stream, and the newest tours' cues (sizing only). */
+  private readonly hints = new Map<string, { window: number; walk?: number }>();
 
-  constructor(private readonly dataSource: DataSource) {}
+  constructor(
+    private readonly dataSource: DataSource,
+    private readonly window = RANK_WINDOW,
+  ) {}
 
   /** The server's FULLTEXT word-length limits, read once (they only change with a restart). */
   async fulltextLimits(): Promise<FulltextLimits> {
@@ -152,26 +260,207 @@ export class CaptionSearch {
     return planWords(words, await this.fulltextLimits());
   }
 
-  /** Cues matching every word of the search: up to MOMENT_CAP + 1 rows, best first. */
-  async byWords(plan: WordPlan): Promise<CueHit[]> {
-    if (!plan.indexed.length && !plan.fallback.length) return [];
-    const fb = fallbackWhere(plan.fallback);
-    let rows: Row[];
-    if (plan.indexed.length) {
-      const against = booleanAllPrefix(plan.indexed);
-      rows = await this.dataSource.query(
+  /**
+   * The first `limit` cues of published tours that match the boolean-mode `against` (and the
+   * `extra` conditions), in ORDER: relevance, then newer tour, then time in the tour. Every way
+   * below gives exactly what ORDER BY over all hits gives; they differ only in what they read.
+   *
+   * Sorting every hit costs a row lookup per hit (about 2–5 µs here), which for a word said in a
+   * tenth of all cues is most of a search's time. InnoDB hands full-text hits over in relevance
+   * order, so the first `window` of them are read without ORDER BY (cues alone; the published
+   * tracks come from a second, small query run beside it). When their scores never rise and the
+   * last one read scores below the `limit`-th kept, every hit that can be in the answer has been
+   * read. When instead a tie at the cut runs past the window (many cues that say the word once),
+   * every hit above the tie has been read, and the rest of the answer is the tie's hits in the
+   * newest tours. A short tie (a frequent word said twice in a thousand cues) is cheaper to read
+   * to its end in a second, longer window; a long one (a word said once in thousands of cues) is
+   * completed by reading whole tours, newest first, until enough of the tie is found
+   * (`newestToursFirst`). Only when neither looks cheaper than sorting every hit, or the window is
+   * not in relevance order, is every hit sorted by the server. How far each lookup had to read is
+   * remembered per words and sizes the next one (and starts its tour reads beside the window);
+   * hints change only what is read, never the answer.
+   */
+  async ranked(against: string, extra: { sql: string; params: readonly string[] }, limit: number): Promise<CueHit[]> {
+    const key = [against, extra.sql, ...extra.params].join('\u0000');
+    const hint = this.hints.get(key);
+    const tracksRead = this.publishedTracks();
+    // When this lookup last had to read the newest tours, start reading them now, beside the
+    // window (two cores do both at once); the window then says how much of it counts.
+    const earlyRead = hint?.walk ? tracksRead.then((tracks) => this.readTours(against, extra, tracks, 0, hint.walk!)) : null;
+    for (const p of [tracksRead, earlyRead]) p?.catch(() => undefined); // awaited below; this only keeps an early failure from going unhandled
+    let window = Math.max(hint?.window ?? this.window, limit + 1);
+    for (let attempt = 0; ; attempt++) {
+      const [tracks, rows] = await Promise.all([
+        tracksRead,
+        this.dataSource.query(
+          `SELECT c.id AS cueId, c.track_id AS trackId, c.start_ms AS startMs, c.end_ms AS endMs, MATCH(c.text) AGAINST (? IN BOOLEAN MODE) AS score
+           FROM cues c
+           WHERE MATCH(c.text) AGAINST (? IN BOOLEAN MODE)${extra.sql ? ` AND ${extra.sql}` : ''}
+           LIMIT ${window}`,
+          [against, against, ...extra.params],
+        ) as Promise<CueRow[]>,
+      ]);
+      const byTrack = new Map(tracks.map((t) => [t.trackId, t]));
+      const read = rows.map((r) => ({ ...r, score: Number(r.score) }));
+      const kept = read.flatMap((r) => {
+        const track = byTrack.get(Number(r.trackId));
+        return track ? [trackHit(r, track)] : [];
+      });
+      const outcome = windowOutcome(read, kept, limit, window);
+      if (outcome === 'every-hit' || outcome === 'settled') {
+        if (outcome === 'settled') {
+          // Next time, read about as far as this search needed: to the first hit below the cut.
+          const cut = kept[limit - 1]!.score;
+          this.hint(key, { window: read.findIndex((r) => r.score < cut) + 1 });
+        }
+        this.rankStats.fromWindow++;
+        return kept.sort(compareHits).slice(0, limit);
+      }
+      if (outcome === 'too-few-kept' && attempt === 0 && kept.length) {
+        // Most hits read were in tours that are not public: read further, in proportion.
+        window = Math.min(RANK_WINDOW_MAX, Math.ceil(((limit + 1) * read.length * 1.3) / kept.length));
+        continue;
+      }
+      if (outcome !== 'tie-runs-on') break;
+
+      const cut = kept[limit - 1]!.score;
+      const above = kept.filter((h) => h.score > cut && !sameScore(h.score, cut));
+      // How common the tie is: its hits came in cue order (the index's order within a tie), so
+      // they and the cue ids they span give its share of all cues.
+      const tieIds = kept.filter((h) => sameScore(h.score, cut)).map((h) => h.cueId);
+      const share = tieIds.length / (Math.max(...tieIds) - Math.min(...tieIds) + 1);
+      const tieStart = read.findIndex((r) => sameScore(r.score, cut));
+      const { cues } = await this.cueCounts();
+      // Costs in cue reads: a full-text fetch costs about 2.5 reads of a cue in track order.
+      const rereadTo = Math.ceil((tieStart + share * cues) * 1.25) + 50;
+      const walkCues = (limit - above.length) / share;
+      if (attempt === 0 && rereadTo * 2.5 < walkCues && rereadTo <= RANK_WINDOW_MAX) {
+        // A short tie (a frequent word said twice in many cues): read the stream past its end.
+        window = rereadTo;
+        continue;
+      }
+      // Sorting every hit fetches at least the tie's hits.
+      if (!(share > 0) || walkCues > 2.5 * share * cues) break;
+      const early = earlyRead ? await earlyRead : null;
+      if (early) this.rankStats.toursReadEarly++;
+      const { answer, walked } = await this.tieNewestToursFirst(extra, against, { cut, above, need: limit - above.length, walkCues }, tracks, limit, early);
+      // Next time: the window up to the tie and a little of it (with room for the hits of tours
+      // that are not public), and the newest tours read at once.
+      this.hint(key, { window: Math.max(tieStart + 100, Math.ceil((limit * read.length) / kept.length) + 30), walk: walked });
+      this.rankStats.newestToursFirst++;
+      return answer;
+    }
+    this.rankStats.sortedAll++;
+    return (
+      (await this.dataSource.query(
         `${SELECT.replace('%SCORE%', 'MATCH(c.text) AGAINST (? IN BOOLEAN MODE)')}
          FROM cues c
          JOIN caption_tracks ct ON ct.id = c.track_id
          JOIN tours t ON t.id = ct.tour_id
-         WHERE MATCH(c.text) AGAINST (? IN BOOLEAN MODE) AND t.state = 'published'${fb.sql ? ` AND ${fb.sql}` : ''}
-         ${ORDER} LIMIT ${MOMENT_CAP + 1}`,
-        [against, against, ...fb.params],
-      );
-    } else {
-      rows = await this.dataSource.query(fallbackOnlySql(fb.sql, MOMENT_CAP + 1), fb.params);
+         WHERE MATCH(c.text) AGAINST (? IN BOOLEAN MODE) AND t.state = 'published'${extra.sql ? ` AND ${extra.sql}` : ''}
+         ${ORDER} LIMIT ${limit}`,
+        [against, against, ...extra.params],
+      )) as Row[]
+    ).map(toHit);
+  }
+
+  /** Remembers how far a lookup needed to read (sizing hints only: answers never depend on them). */
+  private hint(key: string, seen: { window: number; walk?: number }): void {
+    this.hints.delete(key);
+    this.hints.set(key, { window: Math.max(1, Math.ceil(seen.window * 1.15) + 10), walk: seen.walk });
+    if (this.hints.size > WINDOW_HINTS_MAX) this.hints.delete(this.hints.keys().next().value!);
+  }
+
+  /** The caption tracks of published tours, in the order ORDER ranks their tours. */
+  private async publishedTracks(): Promise<TrackInOrder[]> {
+    const rows = (await this.dataSource.query(
+      `SELECT ct.id AS trackId, ct.tour_id AS tourId, ct.lang AS lang, COALESCE(t.filmed_on, DATE(t.published_at)) AS tourDate
+       FROM tours t JOIN caption_tracks ct ON ct.tour_id = t.id
+       WHERE t.state = 'published'
+       ORDER BY tourDate DESC, t.id DESC, ct.id ASC`,
+    )) as { trackId: number | string; tourId: number | string; lang: string; tourDate: string | Date | null }[];
+    return rows.map((r) => ({ trackId: Number(r.trackId), tourId: Number(r.tourId), lang: r.lang, tourDate: dateString(r.tourDate) }));
+  }
+
+  /**
+   * Completes a ranking whose cut falls in a tie that runs past the window: the hits above the tie
+   * (all in `kept`), then the tie's hits in ORDER's remaining keys (newer tour, tour id, time, cue
+   * id), found by reading whole tours newest first. Tours not read all rank after those read, so
+   * once enough of the tie is found the answer is exact.
+   */
+  private async tieNewestToursFirst(
+    extra: { sql: string; params: readonly string[] },
+    against: string,
+    tie: { cut: number; above: readonly CueHit[]; need: number; walkCues: number },
+    tracks: readonly TrackInOrder[],
+    limit: number,
+    early: ToursRead | null,
+  ): Promise<{ answer: CueHit[]; walked: number }> {
+    const { cut, above, need } = tie;
+    const found: CueHit[] = [];
+    let read: ToursRead = early ?? { hits: [], next: 0, cues: 0 };
+    let budget = Math.ceil(tie.walkCues * 1.5);
+    for (;;) {
+      for (const h of read.hits) if (sameScore(h.score, cut)) found.push(h);
+      if (found.length >= need || read.next >= tracks.length) break;
+      read = await this.readTours(against, extra, tracks, read.next, budget, read.cues);
+      budget *= 2;
     }
-    return rows.map(toHit);
+    return { answer: [...above, ...found].sort(compareHits).slice(0, limit), walked: read.cues };
+  }
+
+  /**
+   * Every hit in whole tours of `tracks` from index `from`, about `budget` cues' worth (at least
+   * one tour): a tour's tracks are read together, so every tour read is complete.
+   */
+  private async readTours(
+    against: string,
+    extra: { sql: string; params: readonly string[] },
+    tracks: readonly TrackInOrder[],
+    from: number,
+    budget: number,
+    cuesBefore = 0,
+  ): Promise<ToursRead> {
+    const { cuesPerTrack } = await this.cueCounts();
+    const chunk: TrackInOrder[] = [];
+    let next = from;
+    let cues = 0;
+    while (next < tracks.length && (cues < budget || !chunk.length || tracks[next]!.tourId === tracks[next - 1]!.tourId)) {
+      chunk.push(tracks[next]!);
+      cues += cuesPerTrack;
+      next++;
+    }
+    if (!chunk.length) return { hits: [], next, cues: cuesBefore };
+    const byTrack = new Map(chunk.map((t) => [t.trackId, t]));
+    const rows = (await this.dataSource.query(
+      `SELECT c.id AS cueId, c.track_id AS trackId, c.start_ms AS startMs, c.end_ms AS endMs, MATCH(c.text) AGAINST (? IN BOOLEAN MODE) AS score
+       FROM cues c
+       WHERE c.track_id IN (${chunk.map(() => '?').join(', ')})${extra.sql ? ` AND ${extra.sql}` : ''}
+       HAVING score > 0`,
+      [against, ...chunk.map((t) => t.trackId), ...extra.params],
+    )) as CueRow[];
+    return { hits: rows.map((r) => trackHit(r, byTrack.get(Number(r.trackId))!)), next, cues: cuesBefore + cues };
+  }
+
+  /** About how many cues there are and per track (sizes the newest-tours-first reads; kept a minute). */
+  private async cueCounts(): Promise<{ cuesPerTrack: number; cues: number }> {
+    if (!this.cueStats || Date.now() - this.cueStats.at > 60_000) {
+      const [row] = (await this.dataSource.query(
+        `SELECT (SELECT TABLE_ROWS FROM information_schema.TABLES WHERE TABLE_SCHEMA = DATABASE() AND TABLE_NAME = 'cues') AS cues,
+                (SELECT COUNT(*) FROM caption_tracks) AS tracks`,
+      )) as { cues: number | string | null; tracks: number | string }[];
+      const cues = Math.max(1, Number(row?.cues ?? 0));
+      this.cueStats = { cues, cuesPerTrack: Math.max(1, cues / Math.max(1, Number(row?.tracks ?? 1))), at: Date.now() };
+    }
+    return this.cueStats;
+  }
+
+  /** Cues matching every word of the search: up to MOMENT_CAP + 1 rows, best first. */
+  async byWords(plan: WordPlan): Promise<CueHit[]> {
+    if (!plan.indexed.length && !plan.fallback.length) return [];
+    const fb = fallbackWhere(plan.fallback);
+    if (plan.indexed.length) return this.ranked(booleanAllPrefix(plan.indexed), fb, MOMENT_CAP + 1);
+    return ((await this.dataSource.query(fallbackOnlySql(fb.sql, MOMENT_CAP + 1), fb.params)) as Row[]).map(toHit);
   }
 
   /**
@@ -194,7 +483,7 @@ export class CaptionSearch {
         if (words.length > 1 && planWords([joined], limits).indexed.length) groups.push([joined]);
       }
     }
-    const rows: Row[] = [];
+    const hits: CueHit[] = [];
     const seen = new Set<string>();
     const uniqueGroups = groups.filter((g) => {
       const k = g.join(' ');
@@ -204,28 +493,14 @@ export class CaptionSearch {
     });
     // Candidates are confirmed by the matcher below, so fetch more than will be kept.
     const fetch = (MOMENT_CAP + 1) * 2;
-    if (uniqueGroups.length) {
-      const against = booleanAnyGroup(uniqueGroups);
-      rows.push(
-        ...((await this.dataSource.query(
-          `${SELECT.replace('%SCORE%', 'MATCH(c.text) AGAINST (? IN BOOLEAN MODE)')}
-           FROM cues c
-           JOIN caption_tracks ct ON ct.id = c.track_id
-           JOIN tours t ON t.id = ct.tour_id
-           WHERE MATCH(c.text) AGAINST (? IN BOOLEAN MODE) AND t.state = 'published'
-           ${ORDER} LIMIT ${fetch}`,
-          [against, against],
-        )) as Row[]),
-      );
-    }
+    if (uniqueGroups.length) hits.push(...(await this.ranked(booleanAnyGroup(uniqueGroups), { sql: '', params: [] }, fetch)));
     for (const words of shortOnly.slice(0, 5)) {
       const fb = fallbackWhere(words);
-      rows.push(...((await this.dataSource.query(fallbackOnlySql(fb.sql, fetch), fb.params)) as Row[]));
+      hits.push(...((await this.dataSource.query(fallbackOnlySql(fb.sql, fetch), fb.params)) as Row[]).map(toHit));
     }
     const wanted = new Set(targets.map((t) => t.id));
     const out: CueHit[] = [];
     const taken = new Set<number>();
-    const hits = rows.map(toHit);
     await this.loadTexts(hits);
     for (const hit of hits) {
       if (taken.has(hit.cueId)) continue;
@@ -267,15 +542,7 @@ export function rankMoments(nameHits: readonly CueHit[], wordHits: readonly CueH
     if (known) known.score = Math.max(known.score, h.score);
     else byCue.set(h.cueId, { ...h });
   }
-  return [...byCue.values()].sort(
-    (a, b) =>
-      Number(b.nameHit) - Number(a.nameHit) ||
-      b.score - a.score ||
-      (b.tourDate ?? '').localeCompare(a.tourDate ?? '') ||
-      b.tourId - a.tourId ||
-      a.startMs - b.startMs ||
-      a.cueId - b.cueId,
-  );
+  return [...byCue.values()].sort((a, b) => Number(b.nameHit) - Number(a.nameHit) || compareHits(a, b));
 }
 
 /** The spans to mark in a cue's plain text: the names heard and the search's words. */
