@@ -27,8 +27,10 @@ export const MOMENT_CAP = 200;
 export const RANK_WINDOW = 400;
 /** Furthest a second read of the stream goes to get past a tie (beyond it, other ways are cheaper). */
 const RANK_WINDOW_MAX = 5000;
-/** Lookups whose window size is remembered (oldest forgotten first). */
+/** Lookups whose reads are remembered (oldest forgotten first). */
 const WINDOW_HINTS_MAX = 2000;
+/** Most cues a remembered tour read starts with. */
+const WALK_HINT_MAX = 20_000;
 
 /** A cue of a published tour that a search found. */
 export interface CueHit {
@@ -73,12 +75,15 @@ const ORDER = `ORDER BY score DESC, tourDate DESC, t.id DESC, c.start_ms ASC, c.
 
 /** How ranked lookups were answered (see `CaptionSearch.ranked`). */
 export interface RankStats {
-  /** From the first hits in the index's relevance order alone. */
+  /** From the first hits in the index's relevance order alone (after a second, longer read in `reread` of them). */
   fromWindow: number;
-  /** A long tie at the cut resolved by reading the newest tours' cues first. */
+  reread: number;
+  /** A long tie at the cut finished by reading the newest tours' cues first. */
   newestToursFirst: number;
-  /** Of those, how many had started reading the newest tours beside the window (a hint from an earlier search). */
+  /** Of those, how many used tours read beside the window (sized by an earlier lookup of the same words). */
   toursReadEarly: number;
+  /** Times the scores moved between two statements (captions saved meanwhile), so every hit was sorted instead. */
+  scoresMoved: number;
   /** By sorting every hit. */
   sortedAll: number;
 }
@@ -101,9 +106,11 @@ interface ToursRead {
   hits: CueHit[];
   next: number;
   cues: number;
+  /** Scores the same statement gave the probe cues (see `readTours`), by cue id. */
+  probes: Map<number, number>;
 }
 
-/** A cue row as the ranked lookups read it, before its track is known. */
+/** A cue row as the tour reads return it, before its track is known. */
 interface CueRow {
   cueId: number | string;
   trackId: number | string;
@@ -133,7 +140,7 @@ function toHit(r: Row): CueHit {
   };
 }
 
-/** The order of ORDER in JavaScript, for hits of published tours (their date is never null there). */
+/** The order of ORDER in JavaScript (scores compared exactly, as the server compares them). */
 export function compareHits(a: CueHit, b: CueHit): number {
   return (
     b.score - a.score ||
@@ -156,30 +163,22 @@ function compareDesc(a: string | null, b: string | null): number {
 export type WindowOutcome =
   /** Fewer than `window` were read: they are every hit. */
   | 'every-hit'
-  /** Scores never fall behind and the last one read is below the `limit`-th kept: nothing unread can reach the answer. */
+  /** Scores never rise and the last one read is below the `limit`-th: nothing unread can reach the answer. */
   | 'settled'
-  /** As settled, except that the `limit`-th kept ties with the last one read: unread hits may share its score. */
+  /** As settled, except that the `limit`-th ties with the last one read: unread hits may share its score. */
   | 'tie-runs-on'
-  /** Fewer than `limit` of those read were kept (most were in tours that are not public). */
-  | 'too-few-kept'
   /** Scores rise somewhere: not the index's relevance order, so nothing is concluded from it. */
   | 'unordered';
 
 /**
- * Reads a window taken with `LIMIT window` in the index's order: `read` holds the scores of every
- * row read, in that order; `kept` those of published tours, in the same order. The relevance order
- * is checked, not assumed.
+ * Reads a window of hits taken with `LIMIT window` (window > limit) in the index's order. The
+ * relevance order is checked, not assumed; scores are compared exactly, as the server compares
+ * them (InnoDB sums float terms, so two mixes of words can score one float step apart).
  */
-export function windowOutcome(read: readonly { score: number }[], kept: readonly { score: number }[], limit: number, window: number): WindowOutcome {
-  if (read.length < window) return 'every-hit';
-  for (let i = 1; i < read.length; i++) if (read[i]!.score > read[i - 1]!.score) return 'unordered';
-  if (kept.length < limit) return 'too-few-kept';
-  return read[read.length - 1]!.score < kept[limit - 1]!.score ? 'settled' : 'tie-runs-on';
-}
-
-/** Scores of one tie: equal in the same snapshot; the tolerance only absorbs a change of corpus between two queries. */
-function sameScore(a: number, b: number): boolean {
-  return Math.abs(a - b) <= Math.abs(b) * 1e-6;
+export function windowOutcome(hits: readonly { score: number }[], limit: number, window: number): WindowOutcome {
+  if (hits.length < window) return 'every-hit';
+  for (let i = 1; i < hits.length; i++) if (hits[i]!.score > hits[i - 1]!.score) return 'unordered';
+  return hits[hits.length - 1]!.score < hits[limit - 1]!.score ? 'settled' : 'tie-runs-on';
 }
 
 /**
@@ -198,7 +197,7 @@ function fallbackOnlySql(where: string, limit: number): string {
 }
 
 /** Whole-word conditions for words the FULLTEXT index does not hold. */
-function fallbackWhere(words: readonly string[]): { sql: string; params: string[] } {
+export function fallbackWhere(words: readonly string[]): { sql: string; params: string[] } {
   const parts: string[] = [];
   const params: string[] = [];
   for (const w of words) {
@@ -224,7 +223,7 @@ function fallbackWhere(words: readonly string[]): { sql: string; params: string[
 export class CaptionSearch {
   private limits: FulltextLimits | null = null;
   /** Counts of how ranked lookups were answered since this object was made (the benchmark prints them). */
-  readonly rankStats: RankStats = { fromWindow: 0, newestToursFirst: 0, toursReadEarly: 0, sortedAll: 0 };
+  readonly rankStats: RankStats = { fromWindow: 0, reread: 0, newestToursFirst: 0, toursReadEarly: 0, scoresMoved: 0, sortedAll: 0 };
   private cueStats: { cuesPerTrack: number; cues: number; at: number } | null = null;
   /** How far each recent lookup needed to read: the stream, and the newest tours' cues (sizing only). */
   private readonly hints = new Map<string, { window: number; walk?: number }>();
@@ -267,88 +266,82 @@ export class CaptionSearch {
    *
    * Sorting every hit costs a row lookup per hit (about 2–5 µs here), which for a word said in a
    * tenth of all cues is most of a search's time. InnoDB hands full-text hits over in relevance
-   * order, so the first `window` of them are read without ORDER BY (cues alone; the published
-   * tracks come from a second, small query run beside it). When their scores never rise and the
-   * last one read scores below the `limit`-th kept, every hit that can be in the answer has been
-   * read. When instead a tie at the cut runs past the window (many cues that say the word once),
+   * order, so the first `window` of them are read without ORDER BY (cues first, their track and
+   * tour joined by primary key, published tours only). When their scores never rise and the last
+   * one read scores below the `limit`-th, every hit that can be in the answer has been read
+   * (scores compared exactly, as the server compares them). When instead a tie at the cut runs past the window (many cues that say the word once),
    * every hit above the tie has been read, and the rest of the answer is the tie's hits in the
    * newest tours. A short tie (a frequent word said twice in a thousand cues) is cheaper to read
    * to its end in a second, longer window; a long one (a word said once in thousands of cues) is
    * completed by reading whole tours, newest first, until enough of the tie is found
    * (`newestToursFirst`). Only when neither looks cheaper than sorting every hit, or the window is
-   * not in relevance order, is every hit sorted by the server. How far each lookup had to read is
+   * not in relevance order, or captions were saved between its statements (which moves every
+   * score), is every hit sorted by the server. How far each lookup had to read is
    * remembered per words and sizes the next one (and starts its tour reads beside the window);
    * hints change only what is read, never the answer.
    */
   async ranked(against: string, extra: { sql: string; params: readonly string[] }, limit: number): Promise<CueHit[]> {
+    if (limit < 1) return [];
     const key = [against, extra.sql, ...extra.params].join('\u0000');
     const hint = this.hints.get(key);
-    const tracksRead = this.publishedTracks();
+    let tracksRead: Promise<TrackInOrder[]> | null = null;
+    const tracks = () => (tracksRead ??= this.publishedTracks());
     // When this lookup last had to read the newest tours, start reading them now, beside the
-    // window (two cores do both at once); the window then says how much of it counts.
-    const earlyRead = hint?.walk ? tracksRead.then((tracks) => this.readTours(against, extra, tracks, 0, hint.walk!)) : null;
-    for (const p of [tracksRead, earlyRead]) p?.catch(() => undefined); // awaited below; this only keeps an early failure from going unhandled
-    let window = Math.max(hint?.window ?? this.window, limit + 1);
-    for (let attempt = 0; ; attempt++) {
-      const [tracks, rows] = await Promise.all([
-        tracksRead,
-        this.dataSource.query(
-          `SELECT c.id AS cueId, c.track_id AS trackId, c.start_ms AS startMs, c.end_ms AS endMs, MATCH(c.text) AGAINST (? IN BOOLEAN MODE) AS score
+    // window (two cores do both at once); it counts only if its scores agree with the window's.
+    const earlyRead = hint?.walk ? tracks().then((t) => this.readTours(against, extra, t, 0, hint.walk!, [])) : null;
+    earlyRead?.catch(() => undefined); // awaited below; this only keeps an early failure from going unhandled
+    let window = Math.min(RANK_WINDOW_MAX, Math.max(hint?.window ?? this.window, limit + 1));
+    for (let attempt = 0; attempt < 2; attempt++) {
+      const hits = (
+        (await this.dataSource.query(
+          `${SELECT.replace('SELECT', 'SELECT STRAIGHT_JOIN').replace('%SCORE%', 'MATCH(c.text) AGAINST (? IN BOOLEAN MODE)')}
            FROM cues c
-           WHERE MATCH(c.text) AGAINST (? IN BOOLEAN MODE)${extra.sql ? ` AND ${extra.sql}` : ''}
+           JOIN caption_tracks ct FORCE INDEX (PRIMARY) ON ct.id = c.track_id
+           JOIN tours t FORCE INDEX (PRIMARY) ON t.id = ct.tour_id
+           WHERE MATCH(c.text) AGAINST (? IN BOOLEAN MODE) AND t.state = 'published'${extra.sql ? ` AND ${extra.sql}` : ''}
            LIMIT ${window}`,
           [against, against, ...extra.params],
-        ) as Promise<CueRow[]>,
-      ]);
-      const byTrack = new Map(tracks.map((t) => [t.trackId, t]));
-      const read = rows.map((r) => ({ ...r, score: Number(r.score) }));
-      const kept = read.flatMap((r) => {
-        const track = byTrack.get(Number(r.trackId));
-        return track ? [trackHit(r, track)] : [];
-      });
-      const outcome = windowOutcome(read, kept, limit, window);
+        )) as Row[]
+      ).map(toHit);
+      const outcome = windowOutcome(hits, limit, window);
       if (outcome === 'every-hit' || outcome === 'settled') {
         if (outcome === 'settled') {
-          // Next time, read about as far as this search needed: to the first hit below the cut.
-          const cut = kept[limit - 1]!.score;
-          this.hint(key, { window: read.findIndex((r) => r.score < cut) + 1 });
+          // Next time, read about as far as this lookup needed: to the first hit below the cut.
+          const cut = hits[limit - 1]!.score;
+          this.hint(key, { window: hits.findIndex((h) => h.score < cut) + 1 });
         }
         this.rankStats.fromWindow++;
-        return kept.sort(compareHits).slice(0, limit);
+        return hits.sort(compareHits).slice(0, limit);
       }
-      if (outcome === 'too-few-kept' && attempt === 0 && kept.length) {
-        // Most hits read were in tours that are not public: read further, in proportion.
-        window = Math.min(RANK_WINDOW_MAX, Math.ceil(((limit + 1) * read.length * 1.3) / kept.length));
-        continue;
-      }
-      if (outcome !== 'tie-runs-on') break;
+      if (outcome === 'unordered') break;
 
-      const cut = kept[limit - 1]!.score;
-      const above = kept.filter((h) => h.score > cut && !sameScore(h.score, cut));
+      const cut = hits[limit - 1]!.score;
+      const above = hits.filter((h) => h.score > cut);
+      const tie = hits.filter((h) => h.score === cut);
       // How common the tie is: its hits came in cue order (the index's order within a tie), so
       // they and the cue ids they span give its share of all cues.
-      const tieIds = kept.filter((h) => sameScore(h.score, cut)).map((h) => h.cueId);
-      const share = tieIds.length / (Math.max(...tieIds) - Math.min(...tieIds) + 1);
-      const tieStart = read.findIndex((r) => sameScore(r.score, cut));
+      const ids = tie.map((h) => h.cueId);
+      const share = tie.length / (Math.max(...ids) - Math.min(...ids) + 1);
+      const tieStart = hits.indexOf(tie[0]!);
       const { cues } = await this.cueCounts();
-      // Costs in cue reads: a full-text fetch costs about 2.5 reads of a cue in track order.
+      // Costs counted in cue reads: a full-text fetch costs about 2.5 reads of a cue in track order.
       const rereadTo = Math.ceil((tieStart + share * cues) * 1.25) + 50;
       const walkCues = (limit - above.length) / share;
       if (attempt === 0 && rereadTo * 2.5 < walkCues && rereadTo <= RANK_WINDOW_MAX) {
-        // A short tie (a frequent word said twice in many cues): read the stream past its end.
+        // A short tie (a frequent word said twice in a thousand cues): read the stream past its end.
         window = rereadTo;
+        this.rankStats.reread++;
         continue;
       }
       // Sorting every hit fetches at least the tie's hits.
-      if (!(share > 0) || walkCues > 2.5 * share * cues) break;
+      if (walkCues > 2.5 * share * cues) break;
       const early = earlyRead ? await earlyRead : null;
-      if (early) this.rankStats.toursReadEarly++;
-      const { answer, walked } = await this.tieNewestToursFirst(extra, against, { cut, above, need: limit - above.length, walkCues }, tracks, limit, early);
-      // Next time: the window up to the tie and a little of it (with room for the hits of tours
-      // that are not public), and the newest tours read at once.
-      this.hint(key, { window: Math.max(tieStart + 100, Math.ceil((limit * read.length) / kept.length) + 30), walk: walked });
+      const answer = await this.tieNewestToursFirst(against, extra, { cut, above, tie, need: limit - above.length, walkCues }, await tracks(), early);
+      if (!answer) break;
+      // Next time: the window up to the tie and a little of it, and the newest tours read at once.
+      this.hint(key, { window: Math.max(tieStart + 100, limit + 30), walk: Math.ceil(walkCues * 1.3) });
       this.rankStats.newestToursFirst++;
-      return answer;
+      return answer.sort(compareHits).slice(0, limit);
     }
     this.rankStats.sortedAll++;
     return (
@@ -367,7 +360,10 @@ export class CaptionSearch {
   /** Remembers how far a lookup needed to read (sizing hints only: answers never depend on them). */
   private hint(key: string, seen: { window: number; walk?: number }): void {
     this.hints.delete(key);
-    this.hints.set(key, { window: Math.max(1, Math.ceil(seen.window * 1.15) + 10), walk: seen.walk });
+    this.hints.set(key, {
+      window: Math.min(RANK_WINDOW_MAX, Math.ceil(seen.window * 1.15) + 10),
+      walk: seen.walk === undefined ? undefined : Math.min(WALK_HINT_MAX, seen.walk),
+    });
     if (this.hints.size > WINDOW_HINTS_MAX) this.hints.delete(this.hints.keys().next().value!);
   }
 
@@ -383,35 +379,63 @@ export class CaptionSearch {
   }
 
   /**
-   * Completes a ranking whose cut falls in a tie that runs past the window: the hits above the tie
-   * (all in `kept`), then the tie's hits in ORDER's remaining keys (newer tour, tour id, time, cue
+   * Finishes a ranking whose cut falls in a tie that runs past the window: the hits above the tie
+   * (all read already), then the tie's hits in ORDER's other keys (newer tour, tour id, time, cue
    * id), found by reading whole tours newest first. Tours not read all rank after those read, so
    * once enough of the tie is found the answer is exact.
+   *
+   * The window and these reads are separate statements, and a caption saved in between moves every
+   * score (InnoDB's weights count the documents). So each read also returns two cues the window
+   * scored (probes), and any disagreement, or a hit above the cut the window did not see, gives
+   * up: null, and the caller sorts every hit in one statement. Null too when the reads grow far
+   * past the estimate. The candidates are returned unsorted.
    */
   private async tieNewestToursFirst(
-    extra: { sql: string; params: readonly string[] },
     against: string,
-    tie: { cut: number; above: readonly CueHit[]; need: number; walkCues: number },
+    extra: { sql: string; params: readonly string[] },
+    t: { cut: number; above: readonly CueHit[]; tie: readonly CueHit[]; need: number; walkCues: number },
     tracks: readonly TrackInOrder[],
-    limit: number,
     early: ToursRead | null,
-  ): Promise<{ answer: CueHit[]; walked: number }> {
-    const { cut, above, need } = tie;
+  ): Promise<CueHit[] | null> {
+    const seen = new Map([...t.above, ...t.tie].map((h) => [h.cueId, h.score]));
+    const probes = [t.tie[0]!, t.above[0] ?? t.tie[t.tie.length - 1]!];
+    const agrees = (read: ToursRead, probed: boolean): boolean => {
+      if (probed && !probes.every((p) => read.probes.get(p.cueId) === p.score)) return false;
+      // Every hit the window scored must score the same here, and nothing unseen may beat the cut.
+      return read.hits.every((h) => (seen.has(h.cueId) ? seen.get(h.cueId) === h.score : h.score <= t.cut));
+    };
     const found: CueHit[] = [];
-    let read: ToursRead = early ?? { hits: [], next: 0, cues: 0 };
-    let budget = Math.ceil(tie.walkCues * 1.5);
+    let read: ToursRead = { hits: [], next: 0, cues: 0, probes: new Map() };
+    // The early read had no probes: it counts only when it holds hits the window scored too.
+    if (early && early.hits.some((h) => seen.has(h.cueId))) {
+      if (!agrees(early, false)) return this.moved();
+      read = early;
+      this.rankStats.toursReadEarly++;
+    }
+    const { cuesPerTrack } = await this.cueCounts();
+    const most = 4 * t.walkCues + 4 * cuesPerTrack;
+    let budget = Math.ceil(t.walkCues * 1.5);
     for (;;) {
-      for (const h of read.hits) if (sameScore(h.score, cut)) found.push(h);
-      if (found.length >= need || read.next >= tracks.length) break;
-      read = await this.readTours(against, extra, tracks, read.next, budget, read.cues);
+      for (const h of read.hits) if (h.score === t.cut) found.push(h);
+      if (found.length >= t.need || read.next >= tracks.length) break;
+      if (read.cues > most) return null;
+      read = await this.readTours(against, extra, tracks, read.next, budget, probes, read.cues);
+      if (!agrees(read, true)) return this.moved();
       budget *= 2;
     }
-    return { answer: [...above, ...found].sort(compareHits).slice(0, limit), walked: read.cues };
+    return [...t.above, ...found];
+  }
+
+  private moved(): null {
+    this.rankStats.scoresMoved++;
+    return null;
   }
 
   /**
    * Every hit in whole tours of `tracks` from index `from`, about `budget` cues' worth (at least
-   * one tour): a tour's tracks are read together, so every tour read is complete.
+   * one tour; a tour's tracks are read together, so every tour read is complete), each checked
+   * published in the same statement. The `probes` (cues the window scored) come back in the same
+   * statement too, so their scores show whether the corpus moved in between.
    */
   private async readTours(
     against: string,
@@ -419,6 +443,7 @@ export class CaptionSearch {
     tracks: readonly TrackInOrder[],
     from: number,
     budget: number,
+    probes: readonly CueHit[],
     cuesBefore = 0,
   ): Promise<ToursRead> {
     const { cuesPerTrack } = await this.cueCounts();
@@ -430,16 +455,29 @@ export class CaptionSearch {
       cues += cuesPerTrack;
       next++;
     }
-    if (!chunk.length) return { hits: [], next, cues: cuesBefore };
-    const byTrack = new Map(chunk.map((t) => [t.trackId, t]));
+    if (!chunk.length) return { hits: [], next, cues: cuesBefore, probes: new Map() };
+    const byTrack = new Map(chunk.map((c) => [c.trackId, c]));
+    const probeIds = probes.map((p) => p.cueId);
     const rows = (await this.dataSource.query(
-      `SELECT c.id AS cueId, c.track_id AS trackId, c.start_ms AS startMs, c.end_ms AS endMs, MATCH(c.text) AGAINST (? IN BOOLEAN MODE) AS score
+      // Cues first (by track and by id), then their track and tour by primary key: left to itself
+      // the optimizer starts from every published tour.
+      `SELECT STRAIGHT_JOIN c.id AS cueId, c.track_id AS trackId, c.start_ms AS startMs, c.end_ms AS endMs, MATCH(c.text) AGAINST (? IN BOOLEAN MODE) AS score
        FROM cues c
-       WHERE c.track_id IN (${chunk.map(() => '?').join(', ')})${extra.sql ? ` AND ${extra.sql}` : ''}
+       JOIN caption_tracks ct FORCE INDEX (PRIMARY) ON ct.id = c.track_id
+       JOIN tours t FORCE INDEX (PRIMARY) ON t.id = ct.tour_id
+       WHERE (c.track_id IN (${chunk.map(() => '?').join(', ')})${probeIds.length ? ` OR c.id IN (${probeIds.map(() => '?').join(', ')})` : ''})
+         AND t.state = 'published'${extra.sql ? ` AND ${extra.sql}` : ''}
        HAVING score > 0`,
-      [against, ...chunk.map((t) => t.trackId), ...extra.params],
+      [against, ...chunk.map((c) => c.trackId), ...probeIds, ...extra.params],
     )) as CueRow[];
-    return { hits: rows.map((r) => trackHit(r, byTrack.get(Number(r.trackId))!)), next, cues: cuesBefore + cues };
+    const hits: CueHit[] = [];
+    const probeScores = new Map<number, number>();
+    for (const r of rows) {
+      if (probeIds.includes(Number(r.cueId))) probeScores.set(Number(r.cueId), Number(r.score));
+      const track = byTrack.get(Number(r.trackId));
+      if (track) hits.push(trackHit(r, track));
+    }
+    return { hits, next, cues: cuesBefore + cues, probes: probeScores };
   }
 
   /** About how many cues there are and per track (sizes the newest-tours-first reads; kept a minute). */
