@@ -168,6 +168,55 @@ describe('ranked caption lookups', () => {
     expect(captions.rankStats.scoresMoved).toBeGreaterThan(0);
   });
 
+  it('answers like ORDER BY when a tour is withdrawn or published between its statements', async () => {
+    const real = server.dataSource;
+    // The tour changed is the one that holds the best hit, so it has hits above any cut.
+    let target = 0;
+    const changed = new Set<number>();
+    let flip: 'ready' | 'published' | null = null;
+    const flipping = {
+      query: async (sql: string, params?: unknown[]) => {
+        const rows = await real.query(sql, params);
+        if (flip && sql.includes('STRAIGHT_JOIN') && /LIMIT \d+\s*$/.test(sql)) {
+          const to = flip;
+          flip = null;
+          await real.query('UPDATE tours SET state = ? WHERE id = ?', [to, target]);
+        }
+        return rows;
+      },
+    } as unknown as DataSource;
+    try {
+      const captions = new CaptionSearch(flipping, 3);
+      let compared = 0;
+      let mattered = 0;
+      for (const word of ['maple', 'lantern', 'moss', 'heron']) {
+        const [best] = await real.query(
+          `SELECT ct.tour_id AS tourId FROM cues c JOIN caption_tracks ct ON ct.id = c.track_id WHERE c.id = ?`,
+          [(await serverOrder(booleanAllPrefix([word]), 1))[0]],
+        );
+        target = Number(best.tourId);
+        changed.add(target);
+        for (const [limit, to] of [[5, 'ready'], [17, 'published'], [17, 'ready'], [40, 'published']] as const) {
+          // A lookup answers as of one of its statements: before the change or after it, never a mix.
+          const before = await serverOrder(booleanAllPrefix([word]), limit);
+          flip = to;
+          const got = (await captions.ranked(booleanAllPrefix([word]), NONE, limit)).map((h) => h.cueId);
+          expect(flip, 'the tour changed during the lookup').toBeNull();
+          const after = await serverOrder(booleanAllPrefix([word]), limit);
+          if (JSON.stringify(before) !== JSON.stringify(after)) mattered++;
+          expect([before, after], `${word}, limit ${limit}, tour now ${to}`).toContainEqual(got);
+          compared++;
+        }
+      }
+      expect(compared).toBe(16);
+      // The change mattered to most of these answers, and the cheap ways noticed it.
+      expect(mattered).toBeGreaterThan(8);
+      expect(captions.rankStats.scoresMoved).toBeGreaterThan(0);
+    } finally {
+      for (const id of changed) await real.query(`UPDATE tours SET state = 'published' WHERE id = ?`, [id]);
+    }
+  });
+
   it('never shows a cue of a tour that is not published, also when a long tie is finished from the newest tours', async () => {
     const published = new Set(((await server.dataSource.query(`SELECT id FROM tours WHERE state = 'published'`)) as { id: number }[]).map((r) => Number(r.id)));
     expect(published.size).toBe(14);

@@ -82,7 +82,7 @@ export interface RankStats {
   newestToursFirst: number;
   /** Of those, how many used tours read beside the window (sized by an earlier lookup of the same words). */
   toursReadEarly: number;
-  /** Times the scores moved between two statements (captions saved meanwhile), so every hit was sorted instead. */
+  /** Times captions or tours changed between two statements of a lookup, so every hit was sorted instead. */
   scoresMoved: number;
   /** By sorting every hit. */
   sortedAll: number;
@@ -167,7 +167,7 @@ export type WindowOutcome =
   | 'settled'
   /** As settled, except that the `limit`-th ties with the last one read: unread hits may share its score. */
   | 'tie-runs-on'
-  /** Scores rise somewhere: not the index's relevance order, so nothing is concluded from it. */
+  /** Scores rise somewhere (not the index's relevance order), or the window is no longer than the cut: nothing is concluded from it. */
   | 'unordered';
 
 /**
@@ -177,6 +177,8 @@ export type WindowOutcome =
  */
 export function windowOutcome(hits: readonly { score: number }[], limit: number, window: number): WindowOutcome {
   if (hits.length < window) return 'every-hit';
+  // A window no longer than the cut says nothing about it.
+  if (hits.length <= limit) return 'unordered';
   for (let i = 1; i < hits.length; i++) if (hits[i]!.score > hits[i - 1]!.score) return 'unordered';
   return hits[hits.length - 1]!.score < hits[limit - 1]!.score ? 'settled' : 'tie-runs-on';
 }
@@ -290,7 +292,7 @@ export class CaptionSearch {
     // window (two cores do both at once); it counts only if its scores agree with the window's.
     const earlyRead = hint?.walk ? tracks().then((t) => this.readTours(against, extra, t, 0, hint.walk!, [])) : null;
     earlyRead?.catch(() => undefined); // awaited below; this only keeps an early failure from going unhandled
-    let window = Math.min(RANK_WINDOW_MAX, Math.max(hint?.window ?? this.window, limit + 1));
+    let window = Math.max(limit + 1, Math.min(RANK_WINDOW_MAX, hint?.window ?? this.window));
     for (let attempt = 0; attempt < 2; attempt++) {
       const hits = (
         (await this.dataSource.query(
@@ -327,7 +329,7 @@ export class CaptionSearch {
       // Costs counted in cue reads: a full-text fetch costs about 2.5 reads of a cue in track order.
       const rereadTo = Math.ceil((tieStart + share * cues) * 1.25) + 50;
       const walkCues = (limit - above.length) / share;
-      if (attempt === 0 && rereadTo * 2.5 < walkCues && rereadTo <= RANK_WINDOW_MAX) {
+      if (attempt === 0 && rereadTo > window && rereadTo * 2.5 < walkCues && rereadTo <= RANK_WINDOW_MAX) {
         // A short tie (a frequent word said twice in a thousand cues): read the stream past its end.
         window = rereadTo;
         this.rankStats.reread++;
@@ -384,11 +386,13 @@ export class CaptionSearch {
    * id), found by reading whole tours newest first. Tours not read all rank after those read, so
    * once enough of the tie is found the answer is exact.
    *
-   * The window and these reads are separate statements, and a caption saved in between moves every
-   * score (InnoDB's weights count the documents). So each read also returns two cues the window
-   * scored (probes), and any disagreement, or a hit above the cut the window did not see, gives
-   * up: null, and the caller sorts every hit in one statement. Null too when the reads grow far
-   * past the estimate. The candidates are returned unsorted.
+   * The window and these reads are separate statements. A caption saved in between moves every
+   * score (InnoDB's weights count the documents), and a tour published or withdrawn changes which
+   * hits count. So each read also returns, in the same statement, the hits above the cut and the
+   * ends of the tie as the window scored them (probes): a probe missing or scored differently, a
+   * hit above the cut the window did not see, or a window hit whose track is not listed gives up:
+   * null, and the caller sorts every hit in one statement. Null too when the reads grow far past
+   * the estimate. The candidates are returned unsorted.
    */
   private async tieNewestToursFirst(
     against: string,
@@ -398,7 +402,11 @@ export class CaptionSearch {
     early: ToursRead | null,
   ): Promise<CueHit[] | null> {
     const seen = new Map([...t.above, ...t.tie].map((h) => [h.cueId, h.score]));
-    const probes = [t.tie[0]!, t.above[0] ?? t.tie[t.tie.length - 1]!];
+    // A tour published or withdrawn since the window changes no score: every hit above the cut
+    // and the first of the tie are probed, and every hit the window read must be in `tracks`.
+    const listed = new Set(tracks.map((k) => k.trackId));
+    if (![...t.above, ...t.tie].every((h) => listed.has(h.trackId))) return this.moved();
+    const probes = [...t.above, t.tie[0]!, t.tie[t.tie.length - 1]!];
     const agrees = (read: ToursRead, probed: boolean): boolean => {
       if (probed && !probes.every((p) => read.probes.get(p.cueId) === p.score)) return false;
       // Every hit the window scored must score the same here, and nothing unseen may beat the cut.
@@ -457,7 +465,8 @@ export class CaptionSearch {
     }
     if (!chunk.length) return { hits: [], next, cues: cuesBefore, probes: new Map() };
     const byTrack = new Map(chunk.map((c) => [c.trackId, c]));
-    const probeIds = probes.map((p) => p.cueId);
+    const probeIds = [...new Set(probes.map((p) => p.cueId))];
+    const probeSet = new Set(probeIds);
     const rows = (await this.dataSource.query(
       // Cues first (by track and by id), then their track and tour by primary key: left to itself
       // the optimizer starts from every published tour.
@@ -473,7 +482,7 @@ export class CaptionSearch {
     const hits: CueHit[] = [];
     const probeScores = new Map<number, number>();
     for (const r of rows) {
-      if (probeIds.includes(Number(r.cueId))) probeScores.set(Number(r.cueId), Number(r.score));
+      if (probeSet.has(Number(r.cueId))) probeScores.set(Number(r.cueId), Number(r.score));
       const track = byTrack.get(Number(r.trackId));
       if (track) hits.push(trackHit(r, track));
     }
