@@ -89,7 +89,7 @@ try {
   // A fresh lookup object, as after a restart: a word's first lookup has no hint of how far to read.
   const captions = new CaptionSearch(ds);
   const ftOnly = await time(captionWords, async (q) => captions.byWords(await plan(q)));
-  const { fromWindow: settled, reread, newestToursFirst: walked, toursReadEarly: walkedEarly, scoresMoved, sortedAll } = captions.rankStats;
+  const { fromWindow: settled, reread, newestToursFirst: walked, toursReadEarly: walkedEarly, changedMidLookup, sortedAll } = captions.rankStats;
   const likeScan = await time(captionWords, (q) =>
     ds.query(
       `SELECT c.id, c.text, COALESCE(t.filmed_on, DATE(t.published_at)) AS tourDate
@@ -121,7 +121,7 @@ try {
   console.log(
     `  how the ${settled + walked + sortedAll} lookups ranked: ${settled} from the first hits in relevance order (${RANK_WINDOW} unless an earlier lookup of the same words read ` +
       `less; ${reread} read a second, longer window), ${walked} also read the newest tours for a tie at the cut (${walkedEarly} of them beside the window), ` +
-      `${sortedAll} sorted every hit (${scoresMoved} because captions changed mid-lookup)`,
+      `${sortedAll} sorted every hit (${changedMidLookup} because captions changed mid-lookup)`,
   );
   console.log(`  ratio LIKE scan / FULLTEXT: p50 ${(likeScan.p50 / ftOnly.p50).toFixed(1)}×, p95 ${(likeScan.p95 / ftOnly.p95).toFixed(1)}×`);
   const captionP95 = results['caption word (FULLTEXT)']!.p95;

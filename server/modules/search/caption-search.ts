@@ -69,9 +69,33 @@ interface Row {
 
 // Only published tours: drafts and private tours never reach search, whoever asks. The text is left
 // out of ranked queries: a TEXT column would push the sort into an on-disk temporary table.
+/** The date tours are ordered by: when filmed, else when published (as `tourDate` in tour-search.ts). */
+const TOUR_DATE = 'COALESCE(t.filmed_on, DATE(t.published_at))';
 const SELECT = `SELECT c.id AS cueId, c.track_id AS trackId, ct.tour_id AS tourId, ct.lang AS lang, c.start_ms AS startMs,
-       c.end_ms AS endMs, %SCORE% AS score, COALESCE(t.filmed_on, DATE(t.published_at)) AS tourDate`;
+       c.end_ms AS endMs, %SCORE% AS score, ${TOUR_DATE} AS tourDate`;
 const ORDER = `ORDER BY score DESC, tourDate DESC, t.id DESC, c.start_ms ASC, c.id ASC`;
+/** InnoDB's boolean-mode relevance of a cue for the search's terms (the first `?`). */
+const MATCH_SCORE = 'MATCH(c.text) AGAINST (? IN BOOLEAN MODE)';
+/**
+ * Cues with their track and tour, joined by primary key. Put after `SELECT STRAIGHT_JOIN`, the
+ * cues are read first: left to itself the optimizer may start from every published tour.
+ */
+const CUES_TRACKS_TOURS = `FROM cues c
+       JOIN caption_tracks ct FORCE INDEX (PRIMARY) ON ct.id = c.track_id
+       JOIN tours t FORCE INDEX (PRIMARY) ON t.id = ct.tour_id`;
+
+/** A condition on cues with its parameters (see `fallbackWhere`). */
+export interface CueCondition {
+  sql: string;
+  params: string[];
+}
+
+const NO_CONDITION: CueCondition = { sql: '', params: [] };
+
+/** ` AND <condition>`, or nothing for an empty one. */
+function andAlso(extra: CueCondition): string {
+  return extra.sql ? ` AND ${extra.sql}` : '';
+}
 
 /** How ranked lookups were answered (see `CaptionSearch.ranked`). */
 export interface RankStats {
@@ -83,7 +107,7 @@ export interface RankStats {
   /** Of those, how many used tours read beside the window (sized by an earlier lookup of the same words). */
   toursReadEarly: number;
   /** Times captions or tours changed between two statements of a lookup, so every hit was sorted instead. */
-  scoresMoved: number;
+  changedMidLookup: number;
   /** By sorting every hit. */
   sortedAll: number;
 }
@@ -191,15 +215,13 @@ export function windowOutcome(hits: readonly { score: number }[], limit: number,
  */
 function fallbackOnlySql(where: string, limit: number): string {
   return `${SELECT.replace('SELECT', 'SELECT STRAIGHT_JOIN').replace('%SCORE%', '0')}
-         FROM cues c
-         JOIN caption_tracks ct ON ct.id = c.track_id
-         JOIN tours t ON t.id = ct.tour_id
+         ${CUES_TRACKS_TOURS}
          WHERE t.state = 'published' AND ${where}
          ${ORDER} LIMIT ${limit}`;
 }
 
 /** Whole-word conditions for words the FULLTEXT index does not hold. */
-export function fallbackWhere(words: readonly string[]): { sql: string; params: string[] } {
+export function fallbackWhere(words: readonly string[]): CueCondition {
   const parts: string[] = [];
   const params: string[] = [];
   for (const w of words) {
@@ -225,7 +247,7 @@ export function fallbackWhere(words: readonly string[]): { sql: string; params: 
 export class CaptionSearch {
   private limits: FulltextLimits | null = null;
   /** Counts of how ranked lookups were answered since this object was made (the benchmark prints them). */
-  readonly rankStats: RankStats = { fromWindow: 0, reread: 0, newestToursFirst: 0, toursReadEarly: 0, scoresMoved: 0, sortedAll: 0 };
+  readonly rankStats: RankStats = { fromWindow: 0, reread: 0, newestToursFirst: 0, toursReadEarly: 0, changedMidLookup: 0, sortedAll: 0 };
   private cueStats: { cuesPerTrack: number; cues: number; at: number } | null = null;
   /** How far each recent lookup needed to read: the stream, and the newest tours' cues (sizing only). */
   private readonly hints = new Map<string, { window: number; walk?: number }>();
@@ -282,7 +304,7 @@ export class CaptionSearch {
    * remembered per words and sizes the next one (and starts its tour reads beside the window);
    * hints change only what is read, never the answer.
    */
-  async ranked(against: string, extra: { sql: string; params: readonly string[] }, limit: number): Promise<CueHit[]> {
+  async ranked(against: string, extra: CueCondition, limit: number): Promise<CueHit[]> {
     if (limit < 1) return [];
     const key = [against, extra.sql, ...extra.params].join('\u0000');
     const hint = this.hints.get(key);
@@ -296,11 +318,9 @@ export class CaptionSearch {
     for (let attempt = 0; attempt < 2; attempt++) {
       const hits = (
         (await this.dataSource.query(
-          `${SELECT.replace('SELECT', 'SELECT STRAIGHT_JOIN').replace('%SCORE%', 'MATCH(c.text) AGAINST (? IN BOOLEAN MODE)')}
-           FROM cues c
-           JOIN caption_tracks ct FORCE INDEX (PRIMARY) ON ct.id = c.track_id
-           JOIN tours t FORCE INDEX (PRIMARY) ON t.id = ct.tour_id
-           WHERE MATCH(c.text) AGAINST (? IN BOOLEAN MODE) AND t.state = 'published'${extra.sql ? ` AND ${extra.sql}` : ''}
+          `${SELECT.replace('SELECT', 'SELECT STRAIGHT_JOIN').replace('%SCORE%', MATCH_SCORE)}
+           ${CUES_TRACKS_TOURS}
+           WHERE ${MATCH_SCORE} AND t.state = 'published'${andAlso(extra)}
            LIMIT ${window}`,
           [against, against, ...extra.params],
         )) as Row[]
@@ -348,11 +368,9 @@ export class CaptionSearch {
     this.rankStats.sortedAll++;
     return (
       (await this.dataSource.query(
-        `${SELECT.replace('%SCORE%', 'MATCH(c.text) AGAINST (? IN BOOLEAN MODE)')}
-         FROM cues c
-         JOIN caption_tracks ct ON ct.id = c.track_id
-         JOIN tours t ON t.id = ct.tour_id
-         WHERE MATCH(c.text) AGAINST (? IN BOOLEAN MODE) AND t.state = 'published'${extra.sql ? ` AND ${extra.sql}` : ''}
+        `${SELECT.replace('%SCORE%', MATCH_SCORE)}
+         ${CUES_TRACKS_TOURS}
+         WHERE ${MATCH_SCORE} AND t.state = 'published'${andAlso(extra)}
          ${ORDER} LIMIT ${limit}`,
         [against, against, ...extra.params],
       )) as Row[]
@@ -372,7 +390,7 @@ export class CaptionSearch {
   /** The caption tracks of published tours, in the order ORDER ranks their tours. */
   private async publishedTracks(): Promise<TrackInOrder[]> {
     const rows = (await this.dataSource.query(
-      `SELECT ct.id AS trackId, ct.tour_id AS tourId, ct.lang AS lang, COALESCE(t.filmed_on, DATE(t.published_at)) AS tourDate
+      `SELECT ct.id AS trackId, ct.tour_id AS tourId, ct.lang AS lang, ${TOUR_DATE} AS tourDate
        FROM tours t JOIN caption_tracks ct ON ct.tour_id = t.id
        WHERE t.state = 'published'
        ORDER BY tourDate DESC, t.id DESC, ct.id ASC`,
@@ -396,7 +414,7 @@ export class CaptionSearch {
    */
   private async tieNewestToursFirst(
     against: string,
-    extra: { sql: string; params: readonly string[] },
+    extra: CueCondition,
     t: { cut: number; above: readonly CueHit[]; tie: readonly CueHit[]; need: number; walkCues: number },
     tracks: readonly TrackInOrder[],
     early: ToursRead | null,
@@ -435,7 +453,7 @@ export class CaptionSearch {
   }
 
   private moved(): null {
-    this.rankStats.scoresMoved++;
+    this.rankStats.changedMidLookup++;
     return null;
   }
 
@@ -447,7 +465,7 @@ export class CaptionSearch {
    */
   private async readTours(
     against: string,
-    extra: { sql: string; params: readonly string[] },
+    extra: CueCondition,
     tracks: readonly TrackInOrder[],
     from: number,
     budget: number,
@@ -468,14 +486,10 @@ export class CaptionSearch {
     const probeIds = [...new Set(probes.map((p) => p.cueId))];
     const probeSet = new Set(probeIds);
     const rows = (await this.dataSource.query(
-      // Cues first (by track and by id), then their track and tour by primary key: left to itself
-      // the optimizer starts from every published tour.
-      `SELECT STRAIGHT_JOIN c.id AS cueId, c.track_id AS trackId, c.start_ms AS startMs, c.end_ms AS endMs, MATCH(c.text) AGAINST (? IN BOOLEAN MODE) AS score
-       FROM cues c
-       JOIN caption_tracks ct FORCE INDEX (PRIMARY) ON ct.id = c.track_id
-       JOIN tours t FORCE INDEX (PRIMARY) ON t.id = ct.tour_id
+      `SELECT STRAIGHT_JOIN c.id AS cueId, c.track_id AS trackId, c.start_ms AS startMs, c.end_ms AS endMs, ${MATCH_SCORE} AS score
+       ${CUES_TRACKS_TOURS}
        WHERE (c.track_id IN (${chunk.map(() => '?').join(', ')})${probeIds.length ? ` OR c.id IN (${probeIds.map(() => '?').join(', ')})` : ''})
-         AND t.state = 'published'${extra.sql ? ` AND ${extra.sql}` : ''}
+         AND t.state = 'published'${andAlso(extra)}
        HAVING score > 0`,
       [against, ...chunk.map((c) => c.trackId), ...probeIds, ...extra.params],
     )) as CueRow[];
@@ -540,7 +554,7 @@ export class CaptionSearch {
     });
     // Candidates are confirmed by the matcher below, so fetch more than will be kept.
     const fetch = (MOMENT_CAP + 1) * 2;
-    if (uniqueGroups.length) hits.push(...(await this.ranked(booleanAnyGroup(uniqueGroups), { sql: '', params: [] }, fetch)));
+    if (uniqueGroups.length) hits.push(...(await this.ranked(booleanAnyGroup(uniqueGroups), NO_CONDITION, fetch)));
     for (const words of shortOnly.slice(0, 5)) {
       const fb = fallbackWhere(words);
       hits.push(...((await this.dataSource.query(fallbackOnlySql(fb.sql, fetch), fb.params)) as Row[]).map(toHit));
