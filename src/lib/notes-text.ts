@@ -4,35 +4,43 @@
  * line break. A no-break space comes back as a plain one, since the text box cannot show it.
  */
 
-const ENTITIES: Record<string, string> = { amp: '&', lt: '<', gt: '>', quot: '"', apos: "'", nbsp: ' ', '#39': "'" };
-
-function decodeEntities(s: string): string {
-  return s.replace(/&(#x[0-9a-f]+|#\d+|[a-z]+|#39);/gi, (whole, name: string) => {
-    const lower = name.toLowerCase();
-    if (lower in ENTITIES) return ENTITIES[lower]!;
-    if (lower.startsWith('#x')) return String.fromCodePoint(parseInt(lower.slice(2), 16));
-    if (lower.startsWith('#')) return String.fromCodePoint(parseInt(lower.slice(1), 10));
-    return whole;
-  });
-}
-
 function escapeHtml(s: string): string {
   return s.replace(/&/g, '&amp;').replace(/</g, '&lt;').replace(/>/g, '&gt;').replace(/"/g, '&quot;').replace(/'/g, '&#39;');
 }
 
-/** The notes as editable paragraphs: block ends become blank lines, <br> a line break, tags dropped. */
+/** Elements whose end starts a new paragraph. */
+const BLOCKS = new Set(['p', 'div', 'h1', 'h2', 'h3', 'h4', 'h5', 'h6', 'blockquote', 'pre']);
+
+/**
+ * The notes as editable paragraphs: block ends become blank lines, <br> a line break, list items
+ * bullets, other tags are dropped. The browser's own parser reads the HTML and its entities.
+ */
 export function notesHtmlToText(html: string): string {
-  const text = html
-    .replace(/\r\n?/g, '\n')
-    .replace(/\n/g, ' ')
-    .replace(/<br\s*\/?>/gi, '\n')
-    .replace(/<\/(p|div|h[1-6]|blockquote|pre)>/gi, '\n\n')
-    .replace(/<li[^>]*>/gi, '• ')
-    .replace(/<\/li>/gi, '\n')
-    .replace(/<[^>]*>/g, '');
-  return decodeEntities(text)
+  const out: string[] = [];
+  const walk = (node: Node): void => {
+    for (const child of Array.from(node.childNodes)) {
+      if (child.nodeType === Node.TEXT_NODE) {
+        // Line breaks in the source are spaces, as a browser shows them; so is a no-break space.
+        out.push((child.textContent ?? '').replace(/\s/g, ' '));
+        continue;
+      }
+      if (child.nodeType !== Node.ELEMENT_NODE) continue;
+      const tag = (child as Element).tagName.toLowerCase();
+      if (tag === 'br') {
+        out.push('\n');
+        continue;
+      }
+      if (tag === 'li') out.push('• ');
+      walk(child);
+      if (tag === 'li') out.push('\n');
+      else if (BLOCKS.has(tag)) out.push('\n\n');
+    }
+  };
+  walk(new DOMParser().parseFromString(html, 'text/html').body);
+  return out
+    .join('')
     .split('\n')
-    .map((l) => l.replace(/[ \t]+/g, ' ').trim())
+    .map((l) => l.replace(/ +/g, ' ').trim())
     .join('\n')
     .replace(/\n{3,}/g, '\n\n')
     .trim();

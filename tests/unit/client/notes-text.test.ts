@@ -23,5 +23,7 @@ describe('notes as plain paragraphs (record notes and pair notes)', () => {
   it('rich notes written elsewhere come back as readable blocks, list items as bullets', () => {
     expect(notesHtmlToText('<p><strong>Bark</strong> is the tell.</p><ul><li>green</li><li>grey</li></ul>')).toBe('Bark is the tell.\n\n• green\n• grey');
     expect(notesHtmlToText('<p>&#8220;Crane&#x201D;&nbsp;red</p>')).toBe('“Crane” red');
+    // Read by the HTML parser (WHATWG HTML), not by pattern: a ">" inside an attribute is no tag end.
+    expect(notesHtmlToText('<p><a href="/x" title="5 > 3">five</a> lobes</p>')).toBe('five lobes');
   });
 });
