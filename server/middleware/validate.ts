@@ -1,8 +1,9 @@
 import type { RequestHandler } from 'express';
 import { z } from 'zod';
+import { idSchema } from '../../shared/schemas/common';
 
-/** A numeric id in a path (`/tours/:id`): a whole number from 1; anything else is a 400 through the zod error mapping. */
-export const idParam = z.coerce.number().int().min(1);
+/** A numeric id in a path (`/tours/:id`), as shared with the client; anything else is a 400 through the zod error mapping. */
+export const idParam = idSchema;
 
 /** Parses req.body with the shared schema; the parsed value replaces the body. */
 export function validateBody<S extends z.ZodTypeAny>(schema: S): RequestHandler {

@@ -21,6 +21,16 @@ export const apiErrorSchema = z.object({
 });
 export type ApiErrorBody = z.infer<typeof apiErrorSchema>;
 
+/**
+ * A record id as it appears in an address or an API path: 1 to 9 digits, from 1. The server refuses
+ * anything else with a 400; the client shows "not found" for it without asking the server.
+ */
+export const idSchema = z
+  .string()
+  .regex(/^\d{1,9}$/)
+  .transform(Number)
+  .pipe(z.number().int().min(1));
+
 /** Paging query shared by list endpoints. */
 export const pageQuerySchema = z.object({
   page: z.coerce.number().int().min(1).max(100_000).default(1),
