@@ -9,9 +9,10 @@
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { Cultivar } from '../../server/db/entities/cultivar.entity';
 import { CultivarVariant } from '../../server/db/entities/cultivar-variant.entity';
-import type { Tour } from '../../server/db/entities/tour.entity';
+import { Tour as TourEntity, type Tour } from '../../server/db/entities/tour.entity';
 import type { User } from '../../server/db/entities/user.entity';
 import { INNODB_DEFAULT_STOPWORDS, INNODB_FT_DEFAULTS } from '../../server/modules/search/fulltext';
+import { momentDetails, SearchService } from '../../server/modules/search/search.service';
 import type { ApiErrorBody } from '../../shared/schemas/common';
 import type { MomentHit, SearchResponse } from '../../shared/schemas/search';
 import { searchResponseSchema } from '../../shared/schemas/search';
@@ -270,6 +271,32 @@ describe('caption moments', () => {
     const spring = items.find((m) => m.tourId === springWalk.id)!;
     expect(spring).toMatchObject({ nameHit: true, startMs: 5000, stop: null, thumbnail: { kind: 'poster' } });
     expect(marked(spring)).toEqual(['Brindelwick Flame']);
+  });
+
+  it('shows the stop a moment starts in, else the one it runs into, and drops a tour withdrawn after the lookup', async () => {
+    const ds = server.dataSource;
+    const tour = await publishedTour(ds, authorUser.id, { title: 'Quenchwood rounds (fictional)', filmedOn: '2022-04-02' });
+    await trackWithCues(ds, tour.id, [
+      [8000, 11_000, 'Quenchwood ember before the first stop.'],
+      [19_000, 22_000, 'Quenchwood ember across two stops.'],
+      [40_000, 42_000, 'Quenchwood ember with no stop near.'],
+    ]);
+    const first = (await stopRow(ds, tour.id, 10_000, 20_000, weir.id, 'First')).id;
+    await stopRow(ds, tour.id, 20_000, 30_000, pebble.id, 'Second');
+    const r = await search('quenchwood');
+    const at = (ms: number) => r.body.moments.items.find((m) => m.startMs === ms)!;
+    expect(at(8000).stop).toMatchObject({ id: first, title: 'First', cultivar: { id: weir.id, slug: weir.slug, fictional: true } });
+    expect(at(19_000).stop).toMatchObject({ id: first });
+    expect(at(40_000).stop).toBeNull();
+
+    // Withdrawn between the lookup and the page of moments: its moments are dropped, not shown.
+    const service = new SearchService(ds);
+    const hits = await service.captions.byWords(await service.captions.plan(['quenchwood']));
+    expect(hits).toHaveLength(3);
+    expect((await momentDetails(ds, hits)).size).toBe(3);
+    await ds.getRepository(TourEntity).update(tour.id, { state: 'ready', publishedAt: null });
+    expect((await momentDetails(ds, hits)).size).toBe(0);
+    expect((await search('quenchwood')).body.moments.total).toBe(0);
   });
 
   it('matches short words and stopwords as whole words by the fallback (innodb_ft_min_token_size 3, InnoDB stopwords)', async () => {

@@ -1,8 +1,7 @@
-import { In, type DataSource } from 'typeorm';
+import type { DataSource } from 'typeorm';
 import { SEARCH_PAGE_SIZES, SEARCH_QUERY_MAX, type MomentHit, type SearchResponse } from '../../../shared/schemas/search';
 import { searchWords } from '../../../shared/search/text-fold';
-import { Stop } from '../../db/entities/stop.entity';
-import { Tour } from '../../db/entities/tour.entity';
+import type { ThumbStripRecord, Tour } from '../../db/entities/tour.entity';
 import { BadRequest } from '../../errors/http-error';
 import { presentCultivarSummary } from '../cultivars/cultivar.presenter';
 import { presentStopCultivar } from '../stops/stop.presenter';
@@ -105,39 +104,23 @@ export class SearchService {
     };
   }
 
-  /** Tour details, the covering stop and the thumbnail for one page of moments (two queries). */
+  /**
+   * The text, the tour, the covering stop and the thumbnail of one page of moments, in one
+   * statement. A tour withdrawn since the lookup drops its moments (search shows published tours only).
+   */
   private async presentMoments(hits: readonly CueHit[], plan: WordPlan): Promise<MomentHit[]> {
     if (!hits.length) return [];
-    const tourIds = [...new Set(hits.map((h) => h.tourId))];
-    const [, tours, stops] = await Promise.all([
-      this.captions.loadTexts(hits),
-      this.dataSource.getRepository(Tour).find({
-        where: { id: In(tourIds) },
-        select: { id: true, title: true, mediaDir: true, posterFile: true, thumbStrip: true },
-      }),
-      this.dataSource
-        .getRepository(Stop)
-        .createQueryBuilder('s')
-        .leftJoin('s.cultivar', 'c')
-        .select(['s.id', 's.tourId', 's.startMs', 's.endMs', 's.title', 'c.id', 'c.acceptedName', 'c.slug', 'c.fictional'])
-        .where('s.tourId IN (:...tourIds)', { tourIds })
-        .orderBy('s.startMs', 'ASC')
-        .getMany(),
-    ]);
-    const tourById = new Map(tours.map((t) => [t.id, t]));
+    const details = await momentDetails(this.dataSource, hits);
     return hits.flatMap((h) => {
-      const tour = tourById.get(h.tourId);
-      if (!tour) return [];
-      const plain = plainCueText(h.rawText ?? '');
+      const d = details.get(h.cueId);
+      if (!d) return [];
+      const plain = plainCueText(d.text);
       // The stop covering the cue's start; else one the cue runs into (a name said just before the stop begins).
-      const stop =
-        stops.find((s) => s.tourId === h.tourId && s.startMs <= h.startMs && h.startMs < s.endMs) ??
-        stops.find((s) => s.tourId === h.tourId && s.startMs < h.endMs && h.startMs < s.endMs) ??
-        null;
+      const stop = d.stops.find((s) => s.startMs <= h.startMs && h.startMs < s.endMs) ?? d.stops.find((s) => s.startMs < h.endMs && h.startMs < s.endMs) ?? null;
       return [
         {
           tourId: h.tourId,
-          tourTitle: tour.title,
+          tourTitle: d.tour.title,
           trackId: h.trackId,
           lang: h.lang,
           startMs: h.startMs,
@@ -147,13 +130,77 @@ export class SearchService {
           nameHit: h.nameHit,
           cultivarIds: h.cultivarIds,
           score: Math.round(h.score * 1000) / 1000,
-          stop: stop
-            ? { id: stop.id, title: stop.title, startMs: stop.startMs, endMs: stop.endMs, cultivar: stop.cultivar ? presentStopCultivar(stop.cultivar) : null }
-            : null,
-          thumbnail: momentThumbnail(tour, h.startMs),
+          stop,
+          thumbnail: momentThumbnail(d.tour, h.startMs),
           link: momentLink(h.tourId, h.startMs),
         },
       ];
     });
   }
+}
+
+interface MomentDetails {
+  text: string;
+  tour: Pick<Tour, 'id' | 'title' | 'mediaDir' | 'posterFile' | 'thumbStrip'>;
+  /** Stops of the tour that overlap the cue or cover its start, earliest first. */
+  stops: NonNullable<MomentHit['stop']>[];
+}
+
+interface MomentRow {
+  cueId: number | string;
+  text: string;
+  tourId: number | string;
+  tourTitle: string;
+  mediaDir: string | null;
+  posterFile: string | null;
+  thumbStrip: string | ThumbStripRecord | null;
+  stopId: number | string | null;
+  stopTitle: string | null;
+  stopStart: number | string | null;
+  stopEnd: number | string | null;
+  cultivarId: number | string | null;
+  acceptedName: string | null;
+  slug: string | null;
+  fictional: number | string | boolean | null;
+}
+
+/**
+ * Cue text, tour and the stops near each cue of published tours, by cue id: one statement (the
+ * stops by the tour-and-start index, only those a moment can show), read as raw rows.
+ */
+export async function momentDetails(dataSource: DataSource, hits: readonly CueHit[]): Promise<Map<number, MomentDetails>> {
+  const ids = [...new Set(hits.map((h) => h.cueId))];
+  const out = new Map<number, MomentDetails>();
+  if (!ids.length) return out;
+  const rows = (await dataSource.query(
+    `SELECT c.id AS cueId, c.text AS text, t.id AS tourId, t.title AS tourTitle, t.media_dir AS mediaDir, t.poster_file AS posterFile,
+            t.thumb_strip AS thumbStrip, s.id AS stopId, s.title AS stopTitle, s.start_ms AS stopStart, s.end_ms AS stopEnd,
+            cv.id AS cultivarId, cv.accepted_name AS acceptedName, cv.slug AS slug, cv.fictional AS fictional
+     FROM cues c
+       JOIN caption_tracks ct ON ct.id = c.track_id
+       JOIN tours t ON t.id = ct.tour_id AND t.state = 'published'
+       LEFT JOIN stops s ON s.tour_id = t.id AND s.start_ms <= GREATEST(c.start_ms, c.end_ms - 1) AND c.start_ms < s.end_ms
+       LEFT JOIN cultivars cv ON cv.id = s.cultivar_id
+     WHERE c.id IN (${ids.map(() => '?').join(', ')})
+     ORDER BY c.id, s.start_ms, s.id`,
+    ids,
+  )) as MomentRow[];
+  for (const r of rows) {
+    const cueId = Number(r.cueId);
+    let d = out.get(cueId);
+    if (!d) {
+      const strip = typeof r.thumbStrip === 'string' ? (JSON.parse(r.thumbStrip) as ThumbStripRecord) : r.thumbStrip;
+      d = { text: r.text, tour: { id: Number(r.tourId), title: r.tourTitle, mediaDir: r.mediaDir, posterFile: r.posterFile, thumbStrip: strip }, stops: [] };
+      out.set(cueId, d);
+    }
+    if (r.stopId == null) continue;
+    d.stops.push({
+      id: Number(r.stopId),
+      title: r.stopTitle ?? '',
+      startMs: Number(r.stopStart),
+      endMs: Number(r.stopEnd),
+      cultivar: r.cultivarId == null ? null : presentStopCultivar({ id: Number(r.cultivarId), acceptedName: r.acceptedName ?? '', slug: r.slug ?? '', fictional: Boolean(Number(r.fictional)) }),
+    });
+  }
+  return out;
 }

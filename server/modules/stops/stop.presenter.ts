@@ -3,7 +3,7 @@ import type { Cultivar } from '../../db/entities/cultivar.entity';
 import type { Stop } from '../../db/entities/stop.entity';
 
 /** The cultivar as a stop shows it: enough for the trail, the chapter title and a link. */
-export function presentStopCultivar(c: Cultivar): NonNullable<StopDto['cultivar']> {
+export function presentStopCultivar(c: Pick<Cultivar, 'id' | 'acceptedName' | 'slug' | 'fictional'>): NonNullable<StopDto['cultivar']> {
   return { id: c.id, acceptedName: c.acceptedName, slug: c.slug, fictional: c.fictional };
 }
 
