@@ -8,7 +8,7 @@
 import type { DataSource } from 'typeorm';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import type { User } from '../../server/db/entities/user.entity';
-import { CaptionSearch, compareHits, fallbackWhere, windowOutcome, type CueCondition, type CueHit, type RankStats } from '../../server/modules/search/caption-search';
+import { CaptionSearch, compareHits, fallbackWhere, firstReads, windowOutcome, type CueCondition, type CueHit, type RankStats } from '../../server/modules/search/caption-search';
 import { booleanAllPrefix } from '../../server/modules/search/fulltext';
 import { makeUser } from '../support/fixtures';
 import { resetTables, startTestServer, type TestServer } from '../support/http';
@@ -125,6 +125,64 @@ describe('ranked caption lookups', () => {
     expect(split.length).toBeGreaterThan(0);
     const { compared } = await compareAll([2, 3, 5], split, [1, 2, 3, 6]);
     expect(compared).toBe(24 * split.length);
+  });
+
+  it('counts words as the server’s full-text index finds them: cues holding each, and cues saying it twice or more', async () => {
+    const ds = server.dataSource;
+    const [{ n }] = await ds.query('SELECT COUNT(*) AS n FROM cues');
+    const cues = Number(n);
+    const captions = new CaptionSearch(ds);
+    captions.terms.estimate(['maple'], cues);
+    await captions.terms.settled();
+    for (const word of ['maple', 'lantern', 'heron', 'moss', 'yew', 'together']) {
+      const against = booleanAllPrefix([word]);
+      // The reference is InnoDB: its hit count, and how many hits score above the lowest score
+      // (boolean mode scores a cue by how often it says the word, so those say it twice or more).
+      const [row] = await ds.query(
+        `SELECT COUNT(*) AS hits, SUM(score > lowest) AS above FROM
+           (SELECT MATCH(text) AGAINST (? IN BOOLEAN MODE) AS score FROM cues WHERE MATCH(text) AGAINST (? IN BOOLEAN MODE)) s,
+           (SELECT MIN(MATCH(text) AGAINST (? IN BOOLEAN MODE)) AS lowest FROM cues WHERE MATCH(text) AGAINST (? IN BOOLEAN MODE)) m`,
+        [against, against, against, against],
+      );
+      const est = captions.terms.estimate([word], cues)!;
+      expect(Number(row.hits), word).toBeGreaterThan(0);
+      expect(Math.round(est.share * cues), `${word}: cues holding it`).toBe(Number(row.hits));
+      expect(Math.round(est.atLeast![1]! * cues), `${word}: cues saying it twice or more`).toBe(Number(row.above));
+    }
+    // Two words are taken as independent: the product of their shares.
+    const both = captions.terms.estimate(['maple', 'moss'], cues)!;
+    expect(both.share).toBeCloseTo(captions.terms.estimate(['maple'], cues)!.share * captions.terms.estimate(['moss'], cues)!.share, 12);
+    expect(both.atLeast).toBeNull();
+  });
+
+  it('sized by word counts before a first lookup (no hint yet), still answers like ORDER BY', async () => {
+    const [{ n }] = await server.dataSource.query('SELECT COUNT(*) AS n FROM cues');
+    const cues = Number(n);
+    const stats = zero();
+    let compared = 0;
+    let sized = 0;
+    for (const window of [3, 8, 25]) {
+      for (const limit of [2, 5, 17, 40]) {
+        // A fresh lookup object per limit: every query below is its first, so only the counts size it.
+        const captions = new CaptionSearch(server.dataSource, window);
+        captions.terms.estimate(['maple'], cues);
+        await captions.terms.settled();
+        for (const query of [['maple'], ['lantern'], ['heron'], ['moss'], ['maple', 'moss']]) {
+          const expect_ = captions.terms.estimate(query, cues);
+          expect(expect_, 'counted').not.toBeNull();
+          if (firstReads(expect_!, limit, cues, window)) sized++;
+          const got = await captions.ranked(booleanAllPrefix(query), NONE, limit, expect_);
+          expect(got.map((h) => h.cueId), `${query.join(' ')}, limit ${limit}, window ${window}`).toEqual(await serverOrder(booleanAllPrefix(query), limit));
+          compared++;
+        }
+        addStats(stats, captions.rankStats);
+      }
+    }
+    expect(compared).toBe(60);
+    // The counts changed how many of these lookups read: early tour reads and longer first windows.
+    expect(sized).toBeGreaterThan(20);
+    expect(stats.toursReadEarly).toBeGreaterThan(0);
+    expect(stats.changedMidLookup).toBe(0);
   });
 
   it('applies the fallback words (stopwords) in every way of answering', async () => {

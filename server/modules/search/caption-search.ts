@@ -15,6 +15,7 @@ import {
   type FulltextLimits,
   type WordPlan,
 } from './fulltext';
+import { TermShares, type TermEstimate } from './term-shares';
 
 /** Most caption hits ranked per kind of lookup; the rest are counted as "more" (see `capped`). */
 export const MOMENT_CAP = 200;
@@ -95,6 +96,36 @@ const NO_CONDITION: CueCondition = { sql: '', params: [] };
 /** ` AND <condition>`, or nothing for an empty one. */
 function andAlso(extra: CueCondition): string {
   return extra.sql ? ` AND ${extra.sql}` : '';
+}
+
+/** How far a lookup reads: the first window of the stream, and the newest tours' cues read beside it. */
+interface ReadHint {
+  window: number;
+  walk?: number;
+}
+
+/**
+ * The first reads of a lookup with no hint yet, from how common its words are. Boolean mode scores
+ * a cue by how often it says the word, so the cut falls in the lowest tier (cues saying it at least
+ * k times) that still holds `limit` cues. Above the bottom tier, relevance order gives that tier
+ * first: the window reads just past it, at once. In the bottom tier (cues that say it once), a tie
+ * longer than the window is finished from the newest tours, so they are read beside it, about as
+ * far as holds the rest of the answer. Rare words, and several words, keep the plain window.
+ */
+export function firstReads(expect: TermEstimate, limit: number, cues: number, window: number): ReadHint | undefined {
+  if (expect.share * cues <= 2 * window) return undefined;
+  const tiers = (expect.atLeast ?? [expect.share]).map((s) => s * cues);
+  let k = tiers.length - 1;
+  while (k > 0 && tiers[k]! < limit) k--;
+  if (k > 0) {
+    const through = Math.ceil(tiers[k]! * 1.15) + 50;
+    return through > window ? { window: through } : undefined;
+  }
+  const above = tiers[1] ?? 0;
+  const onceShare = (tiers[0]! - above) / cues;
+  // Fewer of the cues above the tie may be in published tours than counted: never plan for under a quarter of the answer.
+  const need = Math.max(limit - above * 0.8, limit / 4);
+  return onceShare > 0 ? { window, walk: Math.ceil((need / onceShare) * 1.25) } : undefined;
 }
 
 /** How ranked lookups were answered (see `CaptionSearch.ranked`). */
@@ -250,12 +281,16 @@ export class CaptionSearch {
   readonly rankStats: RankStats = { fromWindow: 0, reread: 0, newestToursFirst: 0, toursReadEarly: 0, changedMidLookup: 0, sortedAll: 0 };
   private cueStats: { cuesPerTrack: number; cues: number; at: number } | null = null;
   /** How far each recent lookup needed to read: the stream, and the newest tours' cues (sizing only). */
-  private readonly hints = new Map<string, { window: number; walk?: number }>();
+  private readonly hints = new Map<string, ReadHint>();
+  /** How common each word is in the cues, counted in the background (sizes a lookup with no hint yet). */
+  readonly terms: TermShares;
 
   constructor(
     private readonly dataSource: DataSource,
     private readonly window = RANK_WINDOW,
-  ) {}
+  ) {
+    this.terms = new TermShares(dataSource);
+  }
 
   /** The server's FULLTEXT word-length limits, read once (they only change with a restart). */
   async fulltextLimits(): Promise<FulltextLimits> {
@@ -304,14 +339,15 @@ export class CaptionSearch {
    * remembered per words and sizes the next one (and starts its tour reads beside the window);
    * hints change only what is read, never the answer.
    */
-  async ranked(against: string, extra: CueCondition, limit: number): Promise<CueHit[]> {
+  async ranked(against: string, extra: CueCondition, limit: number, expect: TermEstimate | null = null): Promise<CueHit[]> {
     if (limit < 1) return [];
     const key = [against, extra.sql, ...extra.params].join('\u0000');
-    const hint = this.hints.get(key);
+    const hint = this.hints.get(key) ?? (expect ? firstReads(expect, limit, (await this.cueCounts()).cues, this.window) : undefined);
     let tracksRead: Promise<TrackInOrder[]> | null = null;
     const tracks = () => (tracksRead ??= this.publishedTracks());
-    // When this lookup last had to read the newest tours, start reading them now, beside the
-    // window (two cores do both at once); it counts only if its scores agree with the window's.
+    // When this lookup last had to read the newest tours (or the word counts say it will), start
+    // reading them now, beside the window (two cores do both at once); it counts only if its
+    // scores agree with the window's.
     const earlyRead = hint?.walk ? tracks().then((t) => this.readTours(against, extra, t, 0, hint.walk!, [])) : null;
     earlyRead?.catch(() => undefined); // awaited below; this only keeps an early failure from going unhandled
     let window = Math.max(limit + 1, Math.min(RANK_WINDOW_MAX, hint?.window ?? this.window));
@@ -378,7 +414,7 @@ export class CaptionSearch {
   }
 
   /** Remembers how far a lookup needed to read (sizing hints only: answers never depend on them). */
-  private hint(key: string, seen: { window: number; walk?: number }): void {
+  private hint(key: string, seen: ReadHint): void {
     this.hints.delete(key);
     this.hints.set(key, {
       window: Math.min(RANK_WINDOW_MAX, Math.ceil(seen.window * 1.15) + 10),
@@ -520,7 +556,10 @@ export class CaptionSearch {
   async byWords(plan: WordPlan): Promise<CueHit[]> {
     if (!plan.indexed.length && !plan.fallback.length) return [];
     const fb = fallbackWhere(plan.fallback);
-    if (plan.indexed.length) return this.ranked(booleanAllPrefix(plan.indexed), fb, MOMENT_CAP + 1);
+    if (plan.indexed.length) {
+      const expect = plan.fallback.length ? null : this.terms.estimate(plan.indexed, (await this.cueCounts()).cues);
+      return this.ranked(booleanAllPrefix(plan.indexed), fb, MOMENT_CAP + 1, expect);
+    }
     return ((await this.dataSource.query(fallbackOnlySql(fb.sql, MOMENT_CAP + 1), fb.params)) as Row[]).map(toHit);
   }
 
