@@ -275,6 +275,45 @@ describe('ranked caption lookups', () => {
     }
   });
 
+  it('keeps the track list between lookups and notices a tour published since, at its first read', async () => {
+    const real = server.dataSource;
+    let listReads = 0;
+    const counting = {
+      query: async (sql: string, params?: unknown[]) => {
+        if (sql.includes('ORDER BY tourDate DESC, t.id DESC, ct.id ASC')) listReads++;
+        return real.query(sql, params);
+      },
+    } as unknown as DataSource;
+    const captions = new CaptionSearch(counting, 3);
+    // Each lookup is its words' first (no hint lets the window settle it), so each finishes a tie
+    // from the newest tours; "mapl", "maple" and "map" find the same cues.
+    const check = async (prefix: string) => {
+      const against = booleanAllPrefix([prefix]);
+      expect((await captions.ranked(against, NONE, 17)).map((h) => h.cueId), prefix).toEqual(await serverOrder(against, 17));
+    };
+    try {
+      await check('mapl');
+      await check('moss');
+      expect(captions.rankStats.newestToursFirst).toBe(2);
+      expect(listReads).toBe(1);
+      // The draft walk is filmed last: once published, its cues lead the tie.
+      await real.query(`UPDATE tours SET state = 'published', published_at = NOW() WHERE id = ?`, [draftTourId]);
+      const after = await serverOrder(booleanAllPrefix(['maple']), 17);
+      const [{ n }] = await real.query(`SELECT COUNT(*) AS n FROM cues c JOIN caption_tracks ct ON ct.id = c.track_id WHERE ct.tour_id = ? AND c.id IN (${after.join(', ')})`, [draftTourId]);
+      expect(Number(n), 'the new tour changes the answer').toBeGreaterThan(0);
+      await check('maple');
+      expect(captions.rankStats.changedMidLookup).toBe(1);
+      // Read again once, then kept.
+      await check('map');
+      await check('pond');
+      expect(listReads).toBe(2);
+      expect(captions.rankStats.newestToursFirst).toBe(4);
+      expect(captions.rankStats.changedMidLookup).toBe(1);
+    } finally {
+      await real.query(`UPDATE tours SET state = 'ready', published_at = NULL WHERE id = ?`, [draftTourId]);
+    }
+  });
+
   it('never shows a cue of a tour that is not published, also when a long tie is finished from the newest tours', async () => {
     const published = new Set(((await server.dataSource.query(`SELECT id FROM tours WHERE state = 'published'`)) as { id: number }[]).map((r) => Number(r.id)));
     expect(published.size).toBe(14);

@@ -137,7 +137,10 @@ export interface RankStats {
   newestToursFirst: number;
   /** Of those, how many used tours read beside the window (sized by an earlier lookup of the same words). */
   toursReadEarly: number;
-  /** Times captions or tours changed between two statements of a lookup, so every hit was sorted instead. */
+  /**
+   * Times captions or tours changed between two statements of a lookup, or tours since the track
+   * list kept from an earlier lookup was read, so every hit was sorted instead.
+   */
   changedMidLookup: number;
   /** By sorting every hit. */
   sortedAll: number;
@@ -156,6 +159,20 @@ function dateString(d: string | Date | null): string | null {
   return d instanceof Date ? d.toISOString().slice(0, 10) : String(d).slice(0, 10);
 }
 
+/**
+ * A checksum of everything the published-tracks list holds (each published tour's id and dates,
+ * its tracks and their languages), as a scalar subquery the server works out once per statement.
+ * A statement that returns it shows whether a list read earlier still holds.
+ */
+const TRACK_LIST_SUM = `(SELECT CONCAT(COUNT(*), ':', COALESCE(SUM(CRC32(CONCAT_WS('|', lt.id, IFNULL(lt.filmed_on, '-'), IFNULL(lt.published_at, '-'), lc.id, lc.lang))), 0))
+       FROM tours lt JOIN caption_tracks lc ON lc.tour_id = lt.id WHERE lt.state = 'published')`;
+
+/** The caption tracks of published tours in the order ORDER ranks their tours, with the checksum the same statement gave. */
+interface TrackList {
+  tracks: TrackInOrder[];
+  sum: string;
+}
+
 /** Hits read from whole tours, newest first: up to track index `next` (exclusive), about `cues` cues read. */
 interface ToursRead {
   hits: CueHit[];
@@ -163,10 +180,13 @@ interface ToursRead {
   cues: number;
   /** Scores the same statement gave the probe cues (see `readTours`), by cue id. */
   probes: Map<number, number>;
+  /** The track-list checksum as of this read (null when it returned no row). */
+  listSum: string | null;
 }
 
 /** A cue row as the tour reads return it, before its track is known. */
 interface CueRow {
+  listSum: string;
   cueId: number | string;
   trackId: number | string;
   startMs: number | string;
@@ -280,6 +300,8 @@ export class CaptionSearch {
   /** Counts of how ranked lookups were answered since this object was made (the benchmark prints them). */
   readonly rankStats: RankStats = { fromWindow: 0, reread: 0, newestToursFirst: 0, toursReadEarly: 0, changedMidLookup: 0, sortedAll: 0 };
   private cueStats: { cuesPerTrack: number; cues: number; at: number } | null = null;
+  /** The published-tracks list, kept between lookups: every tour read checks it still holds (see TRACK_LIST_SUM). */
+  private trackList: Promise<TrackList> | null = null;
   /** How far each recent lookup needed to read: the stream, and the newest tours' cues (sizing only). */
   private readonly hints = new Map<string, ReadHint>();
   /** How common each word is in the cues, counted in the background (sizes a lookup with no hint yet). */
@@ -343,12 +365,12 @@ export class CaptionSearch {
     if (limit < 1) return [];
     const key = [against, extra.sql, ...extra.params].join('\u0000');
     const hint = this.hints.get(key) ?? (expect ? firstReads(expect, limit, (await this.cueCounts()).cues, this.window) : undefined);
-    let tracksRead: Promise<TrackInOrder[]> | null = null;
+    let tracksRead: Promise<TrackList> | null = null;
     const tracks = () => (tracksRead ??= this.publishedTracks());
     // When this lookup last had to read the newest tours (or the word counts say it will), start
     // reading them now, beside the window (two cores do both at once); it counts only if its
     // scores agree with the window's.
-    const earlyRead = hint?.walk ? tracks().then((t) => this.readTours(against, extra, t, 0, hint.walk!, [])) : null;
+    const earlyRead = hint?.walk ? tracks().then((list) => this.readTours(against, extra, list.tracks, 0, hint.walk!, [])) : null;
     earlyRead?.catch(() => undefined); // awaited below; this only keeps an early failure from going unhandled
     let window = Math.max(limit + 1, Math.min(RANK_WINDOW_MAX, hint?.window ?? this.window));
     for (let attempt = 0; attempt < 2; attempt++) {
@@ -423,15 +445,29 @@ export class CaptionSearch {
     if (this.hints.size > WINDOW_HINTS_MAX) this.hints.delete(this.hints.keys().next().value!);
   }
 
-  /** The caption tracks of published tours, in the order ORDER ranks their tours. */
-  private async publishedTracks(): Promise<TrackInOrder[]> {
+  /** The caption tracks of published tours, in the order ORDER ranks their tours: as last read, else read now. */
+  private publishedTracks(): Promise<TrackList> {
+    if (!this.trackList) {
+      const reading = this.readTrackList();
+      this.trackList = reading;
+      reading.catch(() => {
+        if (this.trackList === reading) this.trackList = null;
+      });
+    }
+    return this.trackList;
+  }
+
+  private async readTrackList(): Promise<TrackList> {
     const rows = (await this.dataSource.query(
-      `SELECT ct.id AS trackId, ct.tour_id AS tourId, ct.lang AS lang, ${TOUR_DATE} AS tourDate
+      `SELECT ct.id AS trackId, ct.tour_id AS tourId, ct.lang AS lang, ${TOUR_DATE} AS tourDate, ${TRACK_LIST_SUM} AS listSum
        FROM tours t JOIN caption_tracks ct ON ct.tour_id = t.id
        WHERE t.state = 'published'
        ORDER BY tourDate DESC, t.id DESC, ct.id ASC`,
-    )) as { trackId: number | string; tourId: number | string; lang: string; tourDate: string | Date | null }[];
-    return rows.map((r) => ({ trackId: Number(r.trackId), tourId: Number(r.tourId), lang: r.lang, tourDate: dateString(r.tourDate) }));
+    )) as { trackId: number | string; tourId: number | string; lang: string; tourDate: string | Date | null; listSum: string }[];
+    return {
+      tracks: rows.map((r) => ({ trackId: Number(r.trackId), tourId: Number(r.tourId), lang: r.lang, tourDate: dateString(r.tourDate) })),
+      sum: rows[0]?.listSum ?? '',
+    };
   }
 
   /**
@@ -443,8 +479,9 @@ export class CaptionSearch {
    * The window and these reads are separate statements. A caption saved in between moves every
    * score (InnoDB's weights count the documents), and a tour published or withdrawn changes which
    * hits count. So each read also returns, in the same statement, the hits above the cut and the
-   * ends of the tie as the window scored them (probes): a probe missing or scored differently, a
-   * hit above the cut the window did not see, or a window hit whose track is not listed gives up:
+   * ends of the tie as the window scored them (probes), and the checksum of the track list (which
+   * is kept between lookups). A probe missing or scored differently, a hit above the cut the window
+   * did not see, a window hit whose track is not listed, or a list that no longer holds gives up:
    * null, and the caller sorts every hit in one statement. Null too when the reads grow far past
    * the estimate. The candidates are returned unsorted.
    */
@@ -452,9 +489,10 @@ export class CaptionSearch {
     against: string,
     extra: CueCondition,
     t: { cut: number; above: readonly CueHit[]; tie: readonly CueHit[]; need: number; walkCues: number },
-    tracks: readonly TrackInOrder[],
+    list: TrackList,
     early: ToursRead | null,
   ): Promise<CueHit[] | null> {
+    const { tracks } = list;
     const seen = new Map([...t.above, ...t.tie].map((h) => [h.cueId, h.score]));
     // A tour published or withdrawn since the window changes no score: every hit above the cut
     // and the first of the tie are probed, and every hit the window read must be in `tracks`.
@@ -462,12 +500,13 @@ export class CaptionSearch {
     if (![...t.above, ...t.tie].every((h) => listed.has(h.trackId))) return this.moved();
     const probes = [...t.above, t.tie[0]!, t.tie[t.tie.length - 1]!];
     const agrees = (read: ToursRead, probed: boolean): boolean => {
+      if (read.listSum !== list.sum) return false;
       if (probed && !probes.every((p) => read.probes.get(p.cueId) === p.score)) return false;
       // Every hit the window scored must score the same here, and nothing unseen may beat the cut.
       return read.hits.every((h) => (seen.has(h.cueId) ? seen.get(h.cueId) === h.score : h.score <= t.cut));
     };
     const found: CueHit[] = [];
-    let read: ToursRead = { hits: [], next: 0, cues: 0, probes: new Map() };
+    let read: ToursRead = { hits: [], next: 0, cues: 0, probes: new Map(), listSum: list.sum };
     // The early read had no probes: it counts only when it holds hits the window scored too.
     if (early && early.hits.some((h) => seen.has(h.cueId))) {
       if (!agrees(early, false)) return this.moved();
@@ -488,8 +527,10 @@ export class CaptionSearch {
     return [...t.above, ...found];
   }
 
+  /** Gives up on a lookup's cheap ways; the track list is read again next time, in case it was what moved. */
   private moved(): null {
     this.rankStats.changedMidLookup++;
+    this.trackList = null;
     return null;
   }
 
@@ -517,12 +558,13 @@ export class CaptionSearch {
       cues += cuesPerTrack;
       next++;
     }
-    if (!chunk.length) return { hits: [], next, cues: cuesBefore, probes: new Map() };
+    if (!chunk.length) return { hits: [], next, cues: cuesBefore, probes: new Map(), listSum: null };
     const byTrack = new Map(chunk.map((c) => [c.trackId, c]));
     const probeIds = [...new Set(probes.map((p) => p.cueId))];
     const probeSet = new Set(probeIds);
     const rows = (await this.dataSource.query(
-      `SELECT STRAIGHT_JOIN c.id AS cueId, c.track_id AS trackId, c.start_ms AS startMs, c.end_ms AS endMs, ${MATCH_SCORE} AS score
+      `SELECT STRAIGHT_JOIN c.id AS cueId, c.track_id AS trackId, c.start_ms AS startMs, c.end_ms AS endMs, ${MATCH_SCORE} AS score,
+              ${TRACK_LIST_SUM} AS listSum
        ${CUES_TRACKS_TOURS}
        WHERE (c.track_id IN (${chunk.map(() => '?').join(', ')})${probeIds.length ? ` OR c.id IN (${probeIds.map(() => '?').join(', ')})` : ''})
          AND t.state = 'published'${andAlso(extra)}
@@ -536,7 +578,7 @@ export class CaptionSearch {
       const track = byTrack.get(Number(r.trackId));
       if (track) hits.push(trackHit(r, track));
     }
-    return { hits, next, cues: cuesBefore + cues, probes: probeScores };
+    return { hits, next, cues: cuesBefore + cues, probes: probeScores, listSum: rows[0]?.listSum ?? null };
   }
 
   /** About how many cues there are and per track (sizes the newest-tours-first reads; kept a minute). */
