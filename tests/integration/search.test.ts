@@ -382,4 +382,23 @@ describe('tours', () => {
     const fifty = await search('50%');
     expect(fifty.body.tours.items.map((x) => x.title)).toEqual(['50% shade walk (fictional)']);
   });
+
+  it('sees a tour renamed, withdrawn or published again, and its author renamed, in the very next search', async () => {
+    const tour = await publishedTour(server.dataSource, authorUser.id, { title: 'Wintergreen lane walk (fictional)' });
+    const ids = async (q: string) => (await search(q)).body.tours.items.map((x) => x.id);
+    expect(await ids('wintergreen')).toContain(tour.id);
+
+    expect((await author.patch(`/api/tours/${tour.id}`, { title: 'Quaggy orchard walk (fictional)' })).status).toBe(200);
+    expect(await ids('wintergreen')).not.toContain(tour.id);
+    expect(await ids('quaggy')).toContain(tour.id);
+
+    expect((await author.post(`/api/tours/${tour.id}/unpublish`, {})).status).toBe(200);
+    expect(await ids('quaggy')).not.toContain(tour.id);
+    expect((await author.post(`/api/tours/${tour.id}/publish`, {})).status).toBe(200);
+    expect(await ids('quaggy')).toContain(tour.id);
+
+    expect((await author.patch('/api/account', { displayName: 'Ottoline Quagg' })).status).toBe(200);
+    const hit = (await search('quaggy')).body.tours.items.find((x) => x.id === tour.id)!;
+    expect(hit.author.displayName).toBe('Ottoline Quagg');
+  });
 });

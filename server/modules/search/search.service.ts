@@ -11,7 +11,8 @@ import { CaptionSearch, MOMENT_CAP, momentSpans, plainCueText, rankMoments, type
 import { CultivarCatalogue } from './cultivar-catalogue';
 import { searchCultivars } from './cultivar-search';
 import { markPlan, type WordPlan } from './fulltext';
-import { searchTours, tourHitText } from './tour-search';
+import { readRevisions } from './search-revisions';
+import { PublishedTours, searchTours, tourHitText } from './tour-search';
 
 /** Most words of one search that are looked up (a 200-character search rarely has more). */
 export const SEARCH_WORDS_MAX = 16;
@@ -29,10 +30,12 @@ function pageOf<T>(items: readonly T[], page: number, size: number): T[] {
  */
 export class SearchService {
   readonly catalogue: CultivarCatalogue;
+  readonly tours: PublishedTours;
   readonly captions: CaptionSearch;
 
   constructor(private readonly dataSource: DataSource) {
     this.catalogue = new CultivarCatalogue(dataSource);
+    this.tours = new PublishedTours(dataSource);
     this.captions = new CaptionSearch(dataSource);
   }
 
@@ -51,11 +54,12 @@ export class SearchService {
     const words = searchWords(q).slice(0, SEARCH_WORDS_MAX);
     const plan = await this.captions.plan(words);
     const markable = markPlan(plan);
-    // Tours and caption words do not depend on the cultivar records: start them first.
-    const early = Promise.all([searchTours(this.dataSource, markable), this.captions.byWords(plan)]);
+    // Caption words and tours do not depend on the cultivar records: start them first.
+    const revisions = readRevisions(this.dataSource);
+    const early = Promise.all([revisions.then((r) => this.tours.get(r.tours)).then((tours) => searchTours(tours, markable)), this.captions.byWords(plan)]);
     early.catch(() => undefined); // awaited below; this only keeps an early failure from going unhandled
 
-    const catalogue = await this.catalogue.get();
+    const catalogue = await this.catalogue.get((await revisions).catalogue);
     const cultivars = searchCultivars(catalogue, q);
     const targets: NameTarget[] = cultivars.matches
       .filter((m) => m.nameHow !== null && m.nameHow !== 'contains')

@@ -1,8 +1,8 @@
 import type { DataSource } from 'typeorm';
 import { foldText, markWords, snippetAround, type MarkWord, type TextSpan } from '../../../shared/search/text-fold';
 import { Tour } from '../../db/entities/tour.entity';
-import { likeContains } from '../../db/like';
 import { htmlToText } from './html-text';
+import { RevisionCache } from './search-revisions';
 
 /** Most tours one search looks at (a club site has far fewer published tours). */
 export const TOUR_CAP = 200;
@@ -24,38 +24,71 @@ function wordTests(words: readonly MarkWord[]): ((folded: string) => boolean)[] 
   });
 }
 
+/** A published tour as search keeps it: its plain description and both texts in comparison form. */
+export interface TourText {
+  tour: Tour;
+  plain: string;
+  titleFold: string;
+  textFold: string;
+}
+
+/**
+ * Every published tour's searchable text, kept in memory while the tours revision stands (see
+ * search-revisions.ts): a club's tours fit easily, and matching them here costs less than asking
+ * the database to scan every description with LIKE on each search.
+ */
+export class PublishedTours {
+  private readonly cache: RevisionCache<TourText[]>;
+
+  constructor(private readonly dataSource: DataSource) {
+    this.cache = new RevisionCache(() => this.load());
+  }
+
+  get(revision: string): Promise<TourText[]> {
+    return this.cache.get(revision);
+  }
+
+  private async load(): Promise<TourText[]> {
+    // Only what a hit shows, with the author's name (many-to-one, so one query).
+    const tours = await this.dataSource
+      .getRepository(Tour)
+      .createQueryBuilder('t')
+      .leftJoin('t.author', 'a')
+      .select(['t.id', 't.title', 't.descriptionHtml', 't.garden', 't.filmedOn', 't.publishedAt', 't.authorId', 't.durationMs', 't.posterFile', 't.mediaDir', 'a.id', 'a.displayName'])
+      .where("t.state = 'published'")
+      .getMany();
+    return tours.map((tour) => {
+      const plain = htmlToText(tour.descriptionHtml);
+      return { tour, plain, titleFold: foldText(tour.title), textFold: foldText(plain) };
+    });
+  }
+}
+
 /**
  * Published tours whose title or description (tags stripped) has every word of the search at the
- * start of a word. LIKE with escaped wildcards narrows the rows in the database (there is no
- * full-text index on tours); the words are then checked on the plain text, so markup such as a
- * link's address never makes a match. Title matches come first, then the newest tours. Marks and
- * snippets are made only for the page shown (see `tourHitText`).
+ * start of a word (whole words unless marked as a prefix), compared in folded form, so markup such
+ * as a link's address never makes a match. Title matches come first, then the newest tours; at
+ * most TOUR_CAP. Marks and snippets are made only for the page shown (see `tourHitText`).
  */
-export async function searchTours(dataSource: DataSource, words: readonly MarkWord[]): Promise<{ matches: TourMatch[]; capped: boolean }> {
+export function searchTours(tours: readonly TourText[], words: readonly MarkWord[]): { matches: TourMatch[]; capped: boolean } {
   if (!words.length) return { matches: [], capped: false };
-  // Only what a hit shows; limit (not take) keeps it one query, as the author join is many-to-one.
-  const qb = dataSource
-    .getRepository(Tour)
-    .createQueryBuilder('t')
-    .leftJoin('t.author', 'a')
-    .select(['t.id', 't.title', 't.descriptionHtml', 't.garden', 't.filmedOn', 't.publishedAt', 't.authorId', 't.durationMs', 't.posterFile', 't.mediaDir', 'a.id', 'a.displayName'])
-    .where("t.state = 'published'");
-  words.forEach((w, i) => {
-    qb.andWhere(`(t.title LIKE :w${i} OR t.descriptionHtml LIKE :w${i})`, { [`w${i}`]: likeContains(w.word) });
-  });
-  const rows = await qb.orderBy('t.publishedAt', 'DESC').addOrderBy('t.id', 'DESC').limit(TOUR_CAP + 1).getMany();
   const tests = wordTests(words);
   const matches: TourMatch[] = [];
-  for (const tour of rows.slice(0, TOUR_CAP)) {
-    const plain = htmlToText(tour.descriptionHtml);
-    const title = foldText(tour.title);
-    const text = foldText(plain);
-    const inTitleEach = tests.map((t) => t(title));
-    if (!tests.every((t, i) => inTitleEach[i] || t(text))) continue;
-    matches.push({ tour, plain, inTitle: inTitleEach.every(Boolean) });
+  for (const t of tours) {
+    let inTitle = true;
+    let every = true;
+    for (const test of tests) {
+      if (test(t.titleFold)) continue;
+      inTitle = false;
+      if (!test(t.textFold)) {
+        every = false;
+        break;
+      }
+    }
+    if (every) matches.push({ tour: t.tour, plain: t.plain, inTitle });
   }
   matches.sort((a, b) => Number(b.inTitle) - Number(a.inTitle) || tourDate(b.tour).localeCompare(tourDate(a.tour)) || b.tour.id - a.tour.id);
-  return { matches, capped: rows.length > TOUR_CAP };
+  return { matches: matches.slice(0, TOUR_CAP), capped: matches.length > TOUR_CAP };
 }
 
 /** The marked title and the description snippet of one hit (null when only the title matched). */
