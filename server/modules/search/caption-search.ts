@@ -195,7 +195,21 @@ interface CueRow {
 }
 
 function trackHit(r: CueRow, track: TrackInOrder): CueHit {
-  return toHit({ ...r, tourId: track.tourId, lang: track.lang, tourDate: track.tourDate });
+  // Built directly, without an intermediate row object: tour reads return hundreds of hits.
+  return {
+    cueId: Number(r.cueId),
+    trackId: Number(r.trackId),
+    tourId: track.tourId,
+    lang: track.lang,
+    startMs: Number(r.startMs),
+    endMs: Number(r.endMs),
+    rawText: null,
+    score: Number(r.score ?? 0),
+    tourDate: track.tourDate,
+    nameHit: false,
+    cultivarIds: [],
+    nameSpans: [],
+  };
 }
 
 function toHit(r: Row): CueHit {
