@@ -56,6 +56,9 @@ describe('search revisions', () => {
     let publishedId = 0;
     expect(await changed(async () => (publishedId = (await publishedTour(server.dataSource, author.id, { title: 'Published walk (fictional)' })).id))).toEqual(['tours']);
     expect(await changed(q(`UPDATE users SET display_name = 'Wren Tallowby' WHERE id = ?`, [author.id]))).toEqual(['tours']);
+    // Capitals and accents alone count as a change (the column's collation would call them equal).
+    expect(await changed(q(`UPDATE users SET display_name = 'wren tallowby' WHERE id = ?`, [author.id]))).toEqual(['tours']);
+    expect(await changed(q(`UPDATE users SET display_name = 'wren tallówby' WHERE id = ?`, [author.id]))).toEqual(['tours']);
     expect(await changed(q(`UPDATE users SET unit_system = 'imperial' WHERE id = ?`, [author.id]))).toEqual([]);
     expect(await changed(q(`DELETE FROM tours WHERE id = ?`, [draftId]))).toEqual([]);
     expect(await changed(q(`DELETE FROM tours WHERE id = ?`, [publishedId]))).toEqual(['tours']);
@@ -68,7 +71,7 @@ describe('search revisions', () => {
 });
 
 describe('RevisionCache', () => {
-  it('builds once per revision, shares a build in progress, and never lets an older build replace a newer one', async () => {
+  it('builds once per revision, shares a build in progress, and never lets a build for a revision already replaced win', async () => {
     const releases: (() => void)[] = [];
     let builds = 0;
     const cache = new RevisionCache(async () => {

@@ -18,7 +18,8 @@ const TRIGGERS: [name: string, event: string, table: string, body: string][] = [
     ['trg_tours_ai_search', 'INSERT', 'tours', BUMP_WHEN('tours', `NEW.\`state\` = 'published'`)],
     ['trg_tours_au_search', 'UPDATE', 'tours', BUMP_WHEN('tours', `OLD.\`state\` = 'published' OR NEW.\`state\` = 'published'`)],
     ['trg_tours_ad_search', 'DELETE', 'tours', BUMP_WHEN('tours', `OLD.\`state\` = 'published'`)],
-    ['trg_users_au_search', 'UPDATE', 'users', BUMP_WHEN('tours', `NOT (OLD.\`display_name\` <=> NEW.\`display_name\`)`)],
+    // Compared as bytes: the column's collation would call a change of capitals or accents no change.
+    ['trg_users_au_search', 'UPDATE', 'users', BUMP_WHEN('tours', `NOT (BINARY OLD.\`display_name\` <=> BINARY NEW.\`display_name\`)`)],
 ];
 
 export class SearchRevisions1796174200000 implements MigrationInterface {
@@ -26,6 +27,8 @@ export class SearchRevisions1796174200000 implements MigrationInterface {
 
     public async up(queryRunner: QueryRunner): Promise<void> {
         await queryRunner.query(`CREATE TABLE \`search_revisions\` (\`name\` varchar(32) NOT NULL, \`revision\` char(36) NOT NULL, PRIMARY KEY (\`name\`)) ENGINE=InnoDB`);
+        // A first value for each, so a database that already holds records and tours starts with one.
+        await queryRunner.query(`INSERT INTO \`search_revisions\` (\`name\`, \`revision\`) VALUES ('catalogue', UUID()), ('tours', UUID())`);
         for (const [name, event, table, body] of TRIGGERS) {
             await queryRunner.query(`CREATE TRIGGER \`${name}\` AFTER ${event} ON \`${table}\` FOR EACH ROW ${body}`);
         }

@@ -110,7 +110,8 @@ interface ReadHint {
  * k times) that still holds `limit` cues. Above the bottom tier, relevance order gives that tier
  * first: the window reads just past it, at once. In the bottom tier (cues that say it once), a tie
  * longer than the window is finished from the newest tours, so they are read beside it, about as
- * far as holds the rest of the answer. Rare words, and several words, keep the plain window.
+ * far as holds the rest of the answer (several words count as one tier). Rare words keep the plain
+ * window.
  */
 export function firstReads(expect: TermEstimate, limit: number, cues: number, window: number): ReadHint | undefined {
   if (expect.share * cues <= 2 * window) return undefined;
@@ -125,7 +126,7 @@ export function firstReads(expect: TermEstimate, limit: number, cues: number, wi
   const onceShare = (tiers[0]! - above) / cues;
   // Fewer of the cues above the tie may be in published tours than counted: never plan for under a quarter of the answer.
   const need = Math.max(limit - above * 0.8, limit / 4);
-  return onceShare > 0 ? { window, walk: Math.ceil((need / onceShare) * 1.25) } : undefined;
+  return onceShare > 0 ? { window, walk: Math.min(WALK_HINT_MAX, Math.ceil((need / onceShare) * 1.25)) } : undefined;
 }
 
 /** How ranked lookups were answered (see `CaptionSearch.ranked`). */
@@ -388,15 +389,17 @@ export class CaptionSearch {
     earlyRead?.catch(() => undefined); // awaited below; this only keeps an early failure from going unhandled
     let window = Math.max(limit + 1, Math.min(RANK_WINDOW_MAX, hint?.window ?? this.window));
     for (let attempt = 0; attempt < 2; attempt++) {
-      const hits = (
-        (await this.dataSource.query(
-          `${SELECT.replace('SELECT', 'SELECT STRAIGHT_JOIN').replace('%SCORE%', MATCH_SCORE)}
-           ${CUES_TRACKS_TOURS}
-           WHERE ${MATCH_SCORE} AND t.state = 'published'${andAlso(extra)}
-           LIMIT ${window}`,
-          [against, against, ...extra.params],
-        )) as Row[]
-      ).map(toHit);
+      // An early read may have been taken before this statement: the window then also says, in the
+      // same statement, which track list it saw, so the two are known to see the same tours.
+      const rows = (await this.dataSource.query(
+        `${SELECT.replace('SELECT', 'SELECT STRAIGHT_JOIN').replace('%SCORE%', MATCH_SCORE)}${earlyRead ? `, ${TRACK_LIST_SUM} AS listSum` : ''}
+         ${CUES_TRACKS_TOURS}
+         WHERE ${MATCH_SCORE} AND t.state = 'published'${andAlso(extra)}
+         LIMIT ${window}`,
+        [against, against, ...extra.params],
+      )) as (Row & { listSum?: string })[];
+      const hits = rows.map(toHit);
+      const windowSum = rows[0]?.listSum ?? null;
       const outcome = windowOutcome(hits, limit, window);
       if (outcome === 'every-hit' || outcome === 'settled') {
         if (outcome === 'settled') {
@@ -430,7 +433,7 @@ export class CaptionSearch {
       // Sorting every hit fetches at least the tie's hits.
       if (walkCues > 2.5 * share * cues) break;
       const early = earlyRead ? await earlyRead : null;
-      const answer = await this.tieNewestToursFirst(against, extra, { cut, above, tie, need: limit - above.length, walkCues }, await tracks(), early);
+      const answer = await this.tieNewestToursFirst(against, extra, { cut, above, tie, need: limit - above.length, walkCues, windowSum }, await tracks(), early);
       if (!answer) break;
       // Next time: the window up to the tie and a little of it, and the newest tours read at once.
       this.hint(key, { window: Math.max(tieStart + 100, limit + 30), walk: Math.ceil(walkCues * 1.3) });
@@ -502,7 +505,7 @@ export class CaptionSearch {
   private async tieNewestToursFirst(
     against: string,
     extra: CueCondition,
-    t: { cut: number; above: readonly CueHit[]; tie: readonly CueHit[]; need: number; walkCues: number },
+    t: { cut: number; above: readonly CueHit[]; tie: readonly CueHit[]; need: number; walkCues: number; windowSum: string | null },
     list: TrackList,
     early: ToursRead | null,
   ): Promise<CueHit[] | null> {
@@ -521,9 +524,10 @@ export class CaptionSearch {
     };
     const found: CueHit[] = [];
     let read: ToursRead = { hits: [], next: 0, cues: 0, probes: new Map(), listSum: list.sum };
-    // The early read had no probes: it counts only when it holds hits the window scored too.
+    // The early read had no probes: it counts only when it holds hits the window scored too, and
+    // only when the window saw the same track list (it may have been taken before the window).
     if (early && early.hits.some((h) => seen.has(h.cueId))) {
-      if (!agrees(early, false)) return this.moved();
+      if (t.windowSum !== list.sum || !agrees(early, false)) return this.moved();
       read = early;
       this.rankStats.toursReadEarly++;
     }

@@ -11,7 +11,7 @@ export interface SearchRevisions {
   tours: string;
 }
 
-/** A kind not changed since the table was emptied (a fresh or reset database) has no row yet. */
+/** A kind with no row (the table emptied by hand or by the tests' reset) reads as this. */
 const NO_ROW = 'none';
 
 /** The current revisions: one primary-key read, instead of a checksum over every row. */
@@ -23,8 +23,9 @@ export async function readRevisions(dataSource: DataSource): Promise<SearchRevis
 
 /**
  * A value built from the database and kept while its revision stands. Searches that arrive while it
- * is being built share the build; only the build for the newest revision asked for may replace it,
- * so a slow older build never wins.
+ * is being built share the build; only the build for the revision asked for last may replace it, so
+ * a slow build for a revision already replaced never wins (at worst a reader that is itself late
+ * starts one build too many).
  */
 export class RevisionCache<T> {
   private current: { revision: string; value: T } | null = null;

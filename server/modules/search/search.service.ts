@@ -118,7 +118,8 @@ export class SearchService {
     return hits.flatMap((h) => {
       const d = details.get(h.cueId);
       if (!d) return [];
-      const plain = plainCueText(d.text);
+      // The text the lookup saw when it has it (a name hit's marks were made on it), else as stored now.
+      const plain = plainCueText(h.rawText ?? d.text);
       // The stop covering the cue's start; else one the cue runs into (a name said just before the stop begins).
       const stop = d.stops.find((s) => s.startMs <= h.startMs && h.startMs < s.endMs) ?? d.stops.find((s) => s.startMs < h.endMs && h.startMs < s.endMs) ?? null;
       return [
@@ -183,7 +184,7 @@ export async function momentDetails(dataSource: DataSource, hits: readonly CueHi
      FROM cues c
        JOIN caption_tracks ct ON ct.id = c.track_id
        JOIN tours t ON t.id = ct.tour_id AND t.state = 'published'
-       LEFT JOIN stops s ON s.tour_id = t.id AND s.start_ms <= GREATEST(c.start_ms, c.end_ms - 1) AND c.start_ms < s.end_ms
+       LEFT JOIN stops s ON s.tour_id = t.id AND (s.start_ms <= c.start_ms OR s.start_ms < c.end_ms) AND c.start_ms < s.end_ms
        LEFT JOIN cultivars cv ON cv.id = s.cultivar_id
      WHERE c.id IN (${ids.map(() => '?').join(', ')})
      ORDER BY c.id, s.start_ms, s.id`,

@@ -5,8 +5,11 @@ import { foldText } from '../../../shared/search/text-fold';
 const PAGE = 20_000;
 /** A count older than this is redone on the next lookup that asks. */
 const MAX_AGE_MS = 60 * 60_000;
-/** …and so is one whose cue total is this far (as a share) from the table's current size. */
+/** …and so is one taken when the table's size (as the caller sees it) was this far (as a share) from its size now. */
 const MAX_DRIFT = 0.2;
+/** Counts start at most this often (a failed first count is retried sooner). */
+const MIN_INTERVAL_MS = 5 * 60_000;
+const RETRY_FIRST_MS = 10_000;
 
 const WORD_RUN = /[\p{L}\p{N}]+/gu;
 const ASCII = /^[\x00-\x7f]*$/;
@@ -19,6 +22,8 @@ interface Counts {
   words: string[];
   atLeast: number[][];
   total: number;
+  /** The table's size as the caller gave it when this count started (an estimate, compared only with its like). */
+  sizeSeen: number;
   at: number;
 }
 
@@ -51,19 +56,24 @@ export function cueWords(text: string): Map<string, number> {
 export class TermShares {
   private counts: Counts | null = null;
   private counting: Promise<void> | null = null;
+  private lastStart = -Infinity;
 
   constructor(private readonly dataSource: DataSource) {}
 
   /**
    * Shares of cues that hold every word, the last also as a prefix (as `booleanAllPrefix` asks),
    * taking the words as independent; null until the first count is done. Starts a recount when
-   * the count is old or `cuesNow` (the table's size) has drifted from it; never waits for one.
+   * the count is old or the table's size `cuesNow` (however the caller estimates it, the same way
+   * each time) has drifted from what it was then, at most every few minutes; never waits for one.
    */
   estimate(words: readonly string[], cuesNow: number): TermEstimate | null {
     const c = this.counts;
-    if (!this.counting && (!c || Date.now() - c.at > MAX_AGE_MS || Math.abs(cuesNow - c.total) > MAX_DRIFT * Math.max(c.total, 1))) {
-      this.counting = this.count()
-        .catch(() => undefined) // a failed count leaves the old one (or none); the next lookup retries
+    const now = Date.now();
+    const due = c ? now - c.at > MAX_AGE_MS || Math.abs(cuesNow - c.sizeSeen) > MAX_DRIFT * Math.max(c.sizeSeen, 1) : true;
+    if (due && !this.counting && now - this.lastStart > (c ? MIN_INTERVAL_MS : RETRY_FIRST_MS)) {
+      this.lastStart = now;
+      this.counting = this.count(cuesNow)
+        .catch(() => undefined) // a failed count leaves the old one (or none); a later lookup retries
         .finally(() => (this.counting = null));
     }
     if (!c || !c.total || !words.length) return null;
@@ -79,7 +89,7 @@ export class TermShares {
     await this.counting;
   }
 
-  private async count(): Promise<void> {
+  private async count(sizeSeen: number): Promise<void> {
     const counted = new Map<string, number[]>();
     let total = 0;
     let after = 0;
@@ -97,7 +107,7 @@ export class TermShares {
       after = Number(rows[rows.length - 1]!.id);
     }
     const words = [...counted.keys()].sort();
-    this.counts = { words, atLeast: Array.from({ length: TIMES_COUNTED }, (_, i) => words.map((w) => counted.get(w)![i]!)), total, at: Date.now() };
+    this.counts = { words, atLeast: Array.from({ length: TIMES_COUNTED }, (_, i) => words.map((w) => counted.get(w)![i]!)), total, sizeSeen, at: Date.now() };
   }
 }
 

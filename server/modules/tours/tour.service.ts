@@ -157,8 +157,10 @@ export class TourService {
           state: existing && (existing.state === 'published' || existing.state === 'ready') ? existing.state : 'processing',
         });
         try {
-          tour = await this.repo(m).save(tour);
+          // The job first: saving a published tour locks the search revision (a database trigger),
+          // and taking that lock last keeps two uploads from waiting on each other.
           const job = await this.queue.enqueue({ kind: TRANSCODE_JOB, subjectType: 'tour', subjectId: tour.id, payload: { source: tour.sourceFile } }, m);
+          tour = await this.repo(m).save(tour);
           if (previousSource) await rm(this.storage.resolve(previousSource), { force: true });
           return { tour, job };
         } catch (err) {

@@ -17,7 +17,7 @@ interface FakeHit {
 }
 
 /** A stand-in database over `hits` (all published), answering the statements `ranked` sends. */
-function fakeDb(hits: FakeHit[], tableRows: number): { ds: DataSource; windows: number[] } {
+function fakeDb(hits: FakeHit[], tableRows: number, windowListSum = 'unchanged'): { ds: DataSource; windows: number[] } {
   const windows: number[] = [];
   const row = (h: FakeHit) => ({ cueId: h.cueId, trackId: h.trackId, tourId: h.tourId, lang: 'en', startMs: h.startMs, endMs: h.startMs + 1000, score: h.score, tourDate: h.tourDate });
   // The index's order: relevance, then document (cue) order.
@@ -36,7 +36,8 @@ function fakeDb(hits: FakeHit[], tableRows: number): { ds: DataSource; windows: 
       return all.slice(0, limit).map(row);
     }
     windows.push(limit);
-    return indexOrder.slice(0, limit).map(row);
+    // The window names the track list it saw only when asked (an early read is in flight).
+    return indexOrder.slice(0, limit).map((h) => (sql.includes('AS listSum') ? { ...row(h), listSum: windowListSum } : row(h)));
   };
   return { ds: { query } as unknown as DataSource, windows };
 }
@@ -61,6 +62,28 @@ describe('ranked caption lookups with estimates far off', () => {
     const want = [...hits].sort((a, b) => (a.tourDate < b.tourDate ? 1 : a.tourDate > b.tourDate ? -1 : 0) || b.tourId - a.tourId || a.startMs - b.startMs || a.cueId - b.cueId).slice(0, 201);
     expect(got.map((h) => h.cueId)).toEqual(want.map((h) => h.cueId));
     expect(captions.rankStats.changedMidLookup).toBe(0);
+  });
+
+  it('uses a newest-tours read taken before the window only when the window saw the same track list', async () => {
+    // 900 hits tied, 90 tours of 10; the counts say half of all cues hold the word, so the lookup
+    // reads the newest tours beside its first window.
+    const hits: FakeHit[] = Array.from({ length: 900 }, (_, i) => ({
+      cueId: 1 + i,
+      trackId: 1 + Math.floor(i / 10),
+      tourId: 1 + Math.floor(i / 10),
+      startMs: (i % 10) * 5000,
+      score: 0.5,
+      tourDate: `20${String(10 + (Math.floor(i / 10) % 15)).padStart(2, '0')}-03-01`,
+    }));
+    const want = [...hits].sort((a, b) => (a.tourDate < b.tourDate ? 1 : a.tourDate > b.tourDate ? -1 : 0) || b.tourId - a.tourId || a.startMs - b.startMs || a.cueId - b.cueId).slice(0, 201);
+    for (const [windowSaw, used] of [['unchanged', true], ['a tour published since', false]] as const) {
+      const { ds } = fakeDb(hits, 1800, windowSaw);
+      const captions = new CaptionSearch(ds, 400);
+      const got = await captions.ranked('+word*', { sql: '', params: [] }, 201, { share: 0.5, atLeast: null });
+      expect(got.map((h) => h.cueId), windowSaw).toEqual(want.map((h) => h.cueId));
+      expect(captions.rankStats.toursReadEarly, windowSaw).toBe(used ? 1 : 0);
+      expect(captions.rankStats.changedMidLookup, windowSaw).toBe(used ? 0 : 1);
+    }
   });
 
   it('never concludes from a window no longer than the cut', () => {

@@ -3,9 +3,10 @@
 // index compares words); the counts are checked against the server's own full-text hits in
 // tests/integration/search-ranking.test.ts. The read sizes are Grovewalk's own rule (issue 6), checked
 // here on worked numbers. The caption lines are invented.
-import { describe, expect, it } from 'vitest';
+import type { DataSource } from 'typeorm';
+import { afterEach, describe, expect, it, vi } from 'vitest';
 import { firstReads } from '../../../server/modules/search/caption-search';
-import { cueWords } from '../../../server/modules/search/term-shares';
+import { cueWords, TermShares } from '../../../server/modules/search/term-shares';
 
 describe('cueWords', () => {
   it('folds case and accents and counts how often each word is said', () => {
@@ -43,5 +44,47 @@ describe('firstReads', () => {
 
   it('takes several words as one tier (no counts of repeats)', () => {
     expect(firstReads({ share: 0.02, atLeast: null }, 201, cues, 400)).toEqual({ window: 400, walk: Math.ceil((201 / 0.02) * 1.25) });
+  });
+});
+
+describe('TermShares recounts', () => {
+  afterEach(() => vi.useRealTimers());
+
+  /** A stand-in database holding `n` invented cues; counts the counting statements. */
+  function cuesDb(n: number) {
+    const state = { n, counts: 0 };
+    const ds = {
+      query: async (_sql: string, params: unknown[]) => {
+        const [after, page] = params as [number, number];
+        if (after === 0) state.counts++;
+        return Array.from({ length: Math.max(0, Math.min(page, state.n - after)) }, (_, i) => ({ id: after + i + 1, text: 'maple by the gate' }));
+      },
+    } as unknown as DataSource;
+    return { ds, state };
+  }
+
+  it('counts once, and again only when the size the caller sees drifts by a fifth, at most every five minutes', async () => {
+    vi.useFakeTimers({ now: new Date('2026-03-01T10:00:00Z') });
+    const { ds, state } = cuesDb(1000);
+    const terms = new TermShares(ds);
+    // The caller's size is an estimate (InnoDB's row count), here far from the 1,000 cues really there.
+    expect(terms.estimate(['maple'], 1500)).toBeNull();
+    await terms.settled();
+    expect(state.counts).toBe(1);
+    expect(terms.estimate(['maple'], 1500)!.share).toBe(1);
+    // The same estimate again: no recount, though it is half as large again as the cues counted.
+    for (let i = 0; i < 5; i++) terms.estimate(['maple'], 1500);
+    await terms.settled();
+    expect(state.counts).toBe(1);
+    // Drifted by more than a fifth, but within five minutes of the last count: not yet.
+    state.n = 2000;
+    terms.estimate(['maple'], 3000);
+    await terms.settled();
+    expect(state.counts).toBe(1);
+    vi.setSystemTime(new Date('2026-03-01T10:06:00Z'));
+    terms.estimate(['maple'], 3000);
+    await terms.settled();
+    expect(state.counts).toBe(2);
+    expect(terms.estimate(['gate'], 3000)!.share).toBe(1);
   });
 });
