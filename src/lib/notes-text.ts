@@ -1,5 +1,5 @@
 /*
- * Notes (of a cultivar record, of a pair side by side) are stored as sanitised HTML and edited in
+ * Notes on a pair side by side are stored as sanitised HTML and edited in
  * a plain text box as paragraphs: a blank line starts a new paragraph, a single line break stays a
  * line break. A no-break space comes back as a plain one, since the text box cannot show it.
  */
@@ -58,9 +58,4 @@ export function textToNotesHtml(text: string): string {
     .filter((block) => block.length > 0)
     .map((block) => `<p>${block.split('\n').map((line) => escapeHtml(line.trim())).join('<br>')}</p>`)
     .join('');
-}
-
-/** True when the notes hold formatting that plain paragraphs cannot keep (bold, lists, links…). */
-export function notesHaveFormatting(html: string): boolean {
-  return /<(?!\/?(p|br)\b)[a-z]/i.test(html);
 }

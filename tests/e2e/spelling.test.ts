@@ -318,9 +318,17 @@ describe('authors propose records and moderators look after them', () => {
     await page.getByRole('button', { name: 'Add', exact: true }).click();
     await page.getByRole('region', { name: 'Also written or heard as' }).getByText('Suki no michi').waitFor();
     await page.getByRole('button', { name: 'Edit name, traits and notes' }).click();
-    await page.getByRole('textbox', { name: 'Notes' }).fill('A test record (fictional).\n\nPrune in late winter.');
+    // The notes editor keeps formatting: a bold word typed with the toolbar is still bold on the record.
+    const notes = page.getByRole('textbox', { name: 'Notes' });
+    await notes.click();
+    await page.keyboard.press('ControlOrMeta+A');
+    await page.keyboard.type('A test record (fictional). ');
+    await page.getByRole('button', { name: 'Bold (Ctrl+B)' }).click();
+    await page.keyboard.type('Prune in late winter.');
+    await shot(page, SUITE, '40-record-notes-editor');
     await page.getByRole('button', { name: 'Save changes' }).click();
     await page.getByText('Saved.').waitFor();
+    await page.locator('strong', { hasText: 'Prune in late winter.' }).waitFor();
     // Pruning advice in the notes brings its caution into the safety box.
     await page.getByRole('complementary', { name: 'Safety' }).getByText(/Pruning:/).waitFor();
     await shot(page, SUITE, '41-moderator-tools');

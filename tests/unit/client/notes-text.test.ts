@@ -1,15 +1,13 @@
 import { describe, expect, it } from 'vitest';
-import { notesHaveFormatting, notesHtmlToText, textToNotesHtml } from '@/lib/notes-text';
+import { notesHtmlToText, textToNotesHtml } from '@/lib/notes-text';
 
-describe('notes as plain paragraphs (record notes and pair notes)', () => {
+describe('notes as plain paragraphs (pair notes)', () => {
   it('turns stored HTML into paragraphs and back, escaping what was typed', () => {
     const html = '<p>A low, weeping lace-leaf &amp; a slow grower.</p><p><strong>Care note:</strong> prune in late winter.<br>Lift pots with help.</p>';
     const text = notesHtmlToText(html);
     expect(text).toBe('A low, weeping lace-leaf & a slow grower.\n\nCare note: prune in late winter.\nLift pots with help.');
     expect(textToNotesHtml(text)).toBe('<p>A low, weeping lace-leaf &amp; a slow grower.</p><p>Care note: prune in late winter.<br>Lift pots with help.</p>');
     expect(textToNotesHtml('<script>alert(1)</script>')).toBe('<p>&lt;script&gt;alert(1)&lt;/script&gt;</p>');
-    expect(notesHaveFormatting(html)).toBe(true);
-    expect(notesHaveFormatting('<p>plain<br>text</p>')).toBe(false);
   });
 
   it('plain text becomes escaped paragraphs, and back', () => {

@@ -1,7 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import { updateTourInput } from '@shared/schemas/tours';
 import { changedDetails, detailsInputFrom } from '@/features/tours/lib/details';
-import { linkTarget } from '@/features/tours/lib/link-target';
+import { linkTarget } from '@/lib/link-target';
 import { pageFromParams } from '@/features/tours/lib/page-param';
 import { pickRendition } from '@/features/tours/lib/renditions';
 

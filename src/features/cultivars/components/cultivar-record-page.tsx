@@ -11,6 +11,7 @@ import { isApiError } from '@/lib/api';
 import { useMe } from '@/lib/auth';
 import { useReaderPrefs } from '@/features/preferences/hooks/use-reader-prefs';
 import { WhereToSeeIt } from '@/features/watch/components/where-to-see-it';
+import { richTextClasses } from '@/lib/rich-text';
 import { useCultivar, useLookalikes } from '../api/cultivars-api';
 import { ModeratorTools } from './moderator-tools';
 import { PronunciationBlock } from './pronunciation-block';
@@ -141,7 +142,7 @@ function RecordView({ record }: { record: CultivarFull }) {
           <Section id="notes" title="Notes">
             {record.notesHtml.trim() ? (
               // notesHtml is sanitised by the server (tags and attributes on an allow-list).
-              <div className="max-w-prose space-y-3 [&_a]:text-moss [&_a]:underline [&_li]:my-1 [&_ol]:list-decimal [&_ol]:pl-6 [&_ul]:list-disc [&_ul]:pl-6" dangerouslySetInnerHTML={{ __html: record.notesHtml }} />
+              <div className={richTextClasses} dangerouslySetInnerHTML={{ __html: record.notesHtml }} />
             ) : (
               <p className="text-ink-soft">No notes yet.</p>
             )}

@@ -1,4 +1,4 @@
-import { useId, useState, type FormEvent, type ReactNode } from 'react';
+import { lazy, Suspense, useId, useState, type FormEvent, type ReactNode } from 'react';
 import { USDA_ZONES } from '@shared/hardiness';
 import { INFRASPECIFIC_RANKS } from '@shared/names/cultivar-name';
 import type { CultivarFull, CultivarInput } from '@shared/schemas/cultivars';
@@ -20,7 +20,6 @@ import { CultivarName } from '@/components/cultivar-name';
 import { FormError } from '@/components/form-error';
 import { TextField } from '@/components/text-field';
 import { errorMessage, isApiError } from '@/lib/api';
-import { notesHaveFormatting, notesHtmlToText, textToNotesHtml } from '@/lib/notes-text';
 import {
   BARK_LABELS,
   CONTAINER_LABELS,
@@ -33,6 +32,9 @@ import {
 } from '@/lib/trait-words';
 import { EMPTY_NAME, nameInputOf, nameProblemsByField, namePreview, type NameFormValues } from '../lib/name-form';
 import { colourField, fieldSourceOf, heightForForm, traitsFromForm } from '../lib/trait-form';
+
+/** Tiptap loads with the form that needs it, not with every record page. */
+const RichTextEditor = lazy(() => import('@/components/rich-text-editor'));
 
 const inputClass = 'mt-1 block w-full rounded-md border bg-card px-3 py-2 text-base font-normal';
 
@@ -235,7 +237,8 @@ export function RecordForm({ initial, system, submitLabel, busy, error, onSubmit
   );
   const [touched, setTouched] = useState(false);
   const [clientErrors, setClientErrors] = useState<Record<string, string>>({});
-  const initialNotesText = initial ? notesHtmlToText(initial.notesHtml) : '';
+  // Notes are sent only when edited, so an unchanged record keeps its notes exactly as stored.
+  const [notesHtml, setNotesHtml] = useState<string | null>(null);
   const serverFields = isApiError(error) ? error.fields : {};
   const nameErrors = touched ? nameProblemsByField(name) : {};
   const errors: Record<string, string> = { ...serverFields, ...clientErrors, ...nameErrors };
@@ -258,7 +261,6 @@ export function RecordForm({ initial, system, submitLabel, busy, error, onSubmit
       (form.elements.namedItem(first ?? '') as HTMLElement | null)?.focus?.();
       return;
     }
-    const notesText = String(data.get('notes') ?? '');
     const input: CultivarInput = {
       ...nameInputOf(name),
       traits: traits.traits,
@@ -266,8 +268,7 @@ export function RecordForm({ initial, system, submitLabel, busy, error, onSubmit
       pronunciation: String(data.get('pronunciation') ?? '').trim() || null,
       fictional: data.get('fictional') === 'on',
     };
-    // Unchanged notes are not sent, so formatting they hold is kept.
-    if (!initial || notesText.trim() !== initialNotesText.trim()) input.notesHtml = textToNotesHtml(notesText);
+    if (notesHtml !== null) input.notesHtml = notesHtml;
     onSubmit(input);
   };
 
@@ -330,16 +331,23 @@ export function RecordForm({ initial, system, submitLabel, busy, error, onSubmit
 
       <TraitFields initial={initial?.traits ?? null} system={system} errors={errors} />
 
-      <div>
-        <label htmlFor={`${id}-notes`} className="block font-bold">
+      <div className="space-y-1">
+        <p id={`${id}-notes`} className="font-bold">
           Notes
-        </label>
-        <p id={`${id}-notes-hint`} className="text-sm text-ink-soft">
-          Plain paragraphs: leave a blank line between paragraphs.
-          {initial && notesHaveFormatting(initial.notesHtml) ? ' These notes have bold text, lists or links; editing them here keeps the words but drops that formatting.' : ''}
         </p>
-        <textarea id={`${id}-notes`} name="notes" rows={6} defaultValue={initialNotesText} aria-describedby={`${id}-notes-hint`} className={`${inputClass} border-edge`} />
+        <p id={`${id}-notes-hint`} className="text-sm text-ink-soft">
+          Care, where it grows well, how it differs from look-alikes. Bold, italic, lists and links are kept.
+        </p>
         <FieldError id={`${id}-notes-e`} message={errors.notesHtml} />
+        <Suspense fallback={<div className="grid min-h-52 place-items-center rounded-md border border-edge bg-card text-ink-soft">Loading the editor…</div>}>
+          <RichTextEditor
+            initialHtml={initial?.notesHtml ?? ''}
+            onChange={setNotesHtml}
+            labelId={`${id}-notes`}
+            describedBy={[`${id}-notes-hint`, errors.notesHtml ? `${id}-notes-e` : null].filter(Boolean).join(' ')}
+            invalid={Boolean(errors.notesHtml)}
+          />
+        </Suspense>
       </div>
 
       <label className="flex items-start gap-2">

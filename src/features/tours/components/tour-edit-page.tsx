@@ -20,7 +20,7 @@ import { TranscodePanel } from './transcode-panel';
 import { UploadStatus } from './upload-status';
 import { VideoPicker } from './video-picker';
 
-const RichTextEditor = lazy(() => import('./rich-text-editor'));
+const RichTextEditor = lazy(() => import('@/components/rich-text-editor'));
 
 function DetailsForm({ tour }: { tour: TourDto }) {
   const update = useUpdateTour(tour.id);

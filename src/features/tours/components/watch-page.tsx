@@ -12,7 +12,7 @@ import { useWatch } from '../api/watch-api';
 import type { PlayerController } from '../lib/player-controller';
 import { playerActionForKey } from '../lib/player-keys';
 import { createPlayheadClock } from '../lib/playhead-clock';
-import { richTextClasses } from '../lib/rich-text';
+import { richTextClasses } from '@/lib/rich-text';
 import { parseStartTime } from '../lib/start-time';
 import { stepStop, stopIndexAt } from '../lib/stop-timeline';
 import { absoluteUrl, momentPath, stopName, stopPath, watchDescription, watchTitle } from '../lib/watch-links';

@@ -2,8 +2,8 @@ import { EditorContent, useEditor, useEditorState, type Editor } from '@tiptap/r
 import StarterKit from '@tiptap/starter-kit';
 import { useId, useRef, useState, type ReactNode } from 'react';
 import { Button } from '@/components/button';
-import { linkTarget } from '../lib/link-target';
-import { richTextClasses } from '../lib/rich-text';
+import { linkTarget } from '@/lib/link-target';
+import { richTextClasses } from '@/lib/rich-text';
 
 /** Props of RichTextEditor; the label and hint live outside it so the form controls the wording. */
 export interface RichTextEditorProps {
@@ -121,9 +121,10 @@ function LinkForm({ editor, onClose }: { editor: Editor; onClose: () => void }) 
 }
 
 /**
- * The description editor (Tiptap): paragraphs, bold, italic, lists, links, undo. Loaded on its
- * own when the details form opens, so visitors who only watch never download it. The server
- * cleans the HTML again with its allow-list, so this is a convenience, not a safeguard.
+ * The rich-text editor (Tiptap) for tour descriptions and record notes: paragraphs, bold, italic,
+ * lists, links, undo. Loaded on its own when a form that needs it opens, so visitors who only
+ * watch or read never download it. The server cleans the HTML again with its allow-list, so this
+ * is a convenience, not a safeguard.
  */
 export function RichTextEditor({ initialHtml, onChange, labelId, describedBy, invalid }: RichTextEditorProps) {
   const [linkOpen, setLinkOpen] = useState(false);

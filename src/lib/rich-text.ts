@@ -1,6 +1,7 @@
 /**
- * Typography for rich text written with the description editor, both while editing and on the
- * tour page: the base styles reset lists and headings, so they are given back here.
+ * Typography for rich text written with the rich-text editor, both while editing and where it is
+ * shown (tour descriptions, record notes): the base styles reset lists and headings, so they are
+ * given back here.
  */
 export const richTextClasses =
   'max-w-prose space-y-3 [&_a]:text-moss [&_a]:underline [&_blockquote]:border-l-4 [&_blockquote]:border-rule [&_blockquote]:pl-4 ' +
