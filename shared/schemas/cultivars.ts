@@ -21,12 +21,14 @@ export const cultivarInput = cultivarNameInput.extend({
 });
 export type CultivarInput = z.infer<typeof cultivarInput>;
 
+/** A printed name in segments with italics for display (botanical parts italic, epithet in quotes roman). */
+export const nameSegmentsSchema = z.array(z.object({ text: z.string(), italic: z.boolean() }));
+
 export const cultivarSummarySchema = z.object({
   id: z.number(),
   slug: z.string(),
   acceptedName: z.string(),
-  /** Segments with italics for display (botanical parts italic, epithet in quotes roman). */
-  nameSegments: z.array(z.object({ text: z.string(), italic: z.boolean() })),
+  nameSegments: nameSegmentsSchema,
   genus: z.string(),
   species: z.string().nullable(),
   groupName: z.string().nullable(),

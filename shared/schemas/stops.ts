@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import { nameSegmentsSchema } from './cultivars';
 
 export const stopInput = z
   .object({
@@ -12,7 +13,7 @@ export const stopInput = z
   .refine((s) => s.endMs - s.startMs >= 1000, { message: 'A stop lasts at least one second.', path: ['endMs'] });
 export type StopInput = z.infer<typeof stopInput>;
 
-export const stopCultivarSchema = z.object({ id: z.number(), acceptedName: z.string(), slug: z.string(), fictional: z.boolean() });
+export const stopCultivarSchema = z.object({ id: z.number(), acceptedName: z.string(), nameSegments: nameSegmentsSchema, slug: z.string(), fictional: z.boolean() });
 
 export const stopSchema = z.object({
   id: z.number(),

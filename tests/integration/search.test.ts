@@ -252,6 +252,10 @@ describe('caption moments', () => {
       link: `/tours/${autumnWalk.id}?t=20`,
     });
     expect(marked(m)).toEqual(['Lace', 'lace', 'maple']);
+    // The tree card's name printed with italics (RHS style summary of the ICNCP: genus and species
+    // italic; Group and epithet roman, the epithet in single quotes).
+    expect(m.stop!.cultivar!.nameSegments.filter((x) => x.italic).map((x) => x.text.trim())).toEqual(['Acer palmatum']);
+    expect(m.stop!.cultivar!.nameSegments.map((x) => x.text).join('')).toBe("Acer palmatum (Dissectum Group) 'Quillmere Lace'");
     // 20 s with a tile every 2 s is picture 10: row 1, column 0 of a 10-wide sheet (vf_tile.c layout).
     expect(m.thumbnail).toMatchObject({ kind: 'tile', x: 0, y: 90, w: 160, h: 90, sheetWidth: 1600, sheetHeight: 900 });
     expect((m.thumbnail as { url: string }).url).toMatch(new RegExp(`^/media/tours/${autumnWalk.id}/thumbs-001\\.jpg\\?v=`));

@@ -49,6 +49,12 @@ describe('stop rules', () => {
     const a = await author.post(`/api/tours/${tour.id}/stops`, { startMs: 10_000, endMs: 40_000, title: 'By the gate', cultivarId: flame.id });
     expect(a.status).toBe(201);
     expect(a.body.stop).toMatchObject({ tourId: tour.id, startMs: 10_000, endMs: 40_000, title: 'By the gate', cultivar: { id: flame.id, acceptedName: "Acer palmatum 'Brindlewick Flame'", fictional: true } });
+    // Printed as the RHS "Recommended style for printing plant names" (a summary of the ICNCP, 9th
+    // edition) sets it: genus and species italic, the cultivar epithet roman in single quotes; the
+    // segments read as the accepted name.
+    const segments = a.body.stop.cultivar.nameSegments as { text: string; italic: boolean }[];
+    expect(segments.map((x) => x.text).join('')).toBe("Acer palmatum 'Brindlewick Flame'");
+    expect(segments.filter((x) => x.italic).map((x) => x.text.trim())).toEqual(['Acer palmatum']);
 
     const overlap = await author.post(`/api/tours/${tour.id}/stops`, { startMs: 30_000, endMs: 50_000, cultivarId: lace.id });
     expect(overlap.status).toBe(409);

@@ -20,7 +20,10 @@ import { momentThumbnail } from '../watch/thumbnail.presenter';
 import { CARE_CAUTION, careNoteFor } from './care-note';
 
 /** The record's name fields in the shape the shared name rules take (the Group field is `group` there). */
-export function namePartsOf(c: Pick<Cultivar, 'genus' | 'species' | 'infraspecificRank' | 'infraspecificEpithet' | 'groupName' | 'epithet'>): NameParts {
+/** The columns a printed name is made from. */
+export type NamePartColumns = 'genus' | 'species' | 'infraspecificRank' | 'infraspecificEpithet' | 'groupName' | 'epithet';
+
+export function namePartsOf(c: Pick<Cultivar, NamePartColumns>): NameParts {
   const parts: NameParts = { genus: c.genus, epithet: c.epithet };
   if (c.species) parts.species = c.species;
   if (c.infraspecificRank) parts.infraspecificRank = c.infraspecificRank;

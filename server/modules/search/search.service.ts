@@ -1,6 +1,7 @@
 import type { DataSource } from 'typeorm';
 import { SEARCH_PAGE_SIZES, SEARCH_QUERY_MAX, type MomentHit, type SearchResponse } from '../../../shared/schemas/search';
 import { searchWords } from '../../../shared/search/text-fold';
+import type { Cultivar } from '../../db/entities/cultivar.entity';
 import type { ThumbStripRecord, Tour } from '../../db/entities/tour.entity';
 import { BadRequest } from '../../errors/http-error';
 import { presentCultivarSummary } from '../cultivars/cultivar.presenter';
@@ -167,6 +168,12 @@ interface MomentRow {
   acceptedName: string | null;
   slug: string | null;
   fictional: number | string | boolean | null;
+  genus: string | null;
+  species: string | null;
+  infraspecificRank: Cultivar['infraspecificRank'];
+  infraspecificEpithet: string | null;
+  groupName: string | null;
+  epithet: string | null;
 }
 
 /**
@@ -180,7 +187,8 @@ export async function momentDetails(dataSource: DataSource, hits: readonly CueHi
   const rows = (await dataSource.query(
     `SELECT c.id AS cueId, c.text AS text, t.id AS tourId, t.title AS tourTitle, t.media_dir AS mediaDir, t.poster_file AS posterFile,
             t.thumb_strip AS thumbStrip, s.id AS stopId, s.title AS stopTitle, s.start_ms AS stopStart, s.end_ms AS stopEnd,
-            cv.id AS cultivarId, cv.accepted_name AS acceptedName, cv.slug AS slug, cv.fictional AS fictional
+            cv.id AS cultivarId, cv.accepted_name AS acceptedName, cv.slug AS slug, cv.fictional AS fictional, cv.genus AS genus, cv.species AS species,
+            cv.infraspecific_rank AS infraspecificRank, cv.infraspecific_epithet AS infraspecificEpithet, cv.group_name AS groupName, cv.epithet AS epithet
      FROM cues c
        JOIN caption_tracks ct ON ct.id = c.track_id
        JOIN tours t ON t.id = ct.tour_id AND t.state = 'published'
@@ -204,7 +212,21 @@ export async function momentDetails(dataSource: DataSource, hits: readonly CueHi
       title: r.stopTitle ?? '',
       startMs: Number(r.stopStart),
       endMs: Number(r.stopEnd),
-      cultivar: r.cultivarId == null ? null : presentStopCultivar({ id: Number(r.cultivarId), acceptedName: r.acceptedName ?? '', slug: r.slug ?? '', fictional: Boolean(Number(r.fictional)) }),
+      cultivar:
+        r.cultivarId == null
+          ? null
+          : presentStopCultivar({
+              id: Number(r.cultivarId),
+              acceptedName: r.acceptedName ?? '',
+              slug: r.slug ?? '',
+              fictional: Boolean(Number(r.fictional)),
+              genus: r.genus ?? '',
+              species: r.species,
+              infraspecificRank: r.infraspecificRank,
+              infraspecificEpithet: r.infraspecificEpithet,
+              groupName: r.groupName,
+              epithet: r.epithet ?? '',
+            }),
     });
   }
   return out;

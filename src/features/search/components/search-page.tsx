@@ -116,7 +116,9 @@ function MomentResult({ hit }: { hit: MomentHit }) {
           <p className="mt-1 font-ui text-sm text-ink-soft">
             Tree card:{' '}
             {hit.stop.cultivar ? (
-              <span className="font-bold text-ink">{hit.stop.cultivar.acceptedName}</span>
+              <span className="font-bold text-ink">
+                <CultivarName record={hit.stop.cultivar} />
+              </span>
             ) : (
               <span>unidentified tree{hit.stop.title ? ` (${hit.stop.title})` : ''}</span>
             )}

@@ -3,7 +3,7 @@ import type { StopDto, StopSuggestion } from '@shared/schemas/stops';
 import { Badge } from '@/components/badge';
 import { Button } from '@/components/button';
 import { ConfirmDialog } from '@/components/confirm-dialog';
-import { FictionalMark } from '@/components/cultivar-name';
+import { CultivarName, FictionalMark } from '@/components/cultivar-name';
 import { EmptyState } from '@/components/empty-state';
 import { ErrorState } from '@/components/error-state';
 import { FormError, FormSuccess } from '@/components/form-error';
@@ -88,7 +88,7 @@ function StopItem({ stop, index, here, tourId, durationMs, playheadMs, seek, onC
         <div className="min-w-0 flex-1">
           <p id={titleId} className="font-bold">
             <span className="sr-only">Stop {index + 1}: </span>
-            {stop.title.trim() || stop.cultivar?.acceptedName || 'Unidentified tree'}
+            {stop.title.trim() || (stop.cultivar ? <CultivarName record={stop.cultivar} /> : 'Unidentified tree')}
             {here && (
               <span className="ml-2 align-middle">
                 <Badge tone="moss">Playing now</Badge>
@@ -200,7 +200,7 @@ function Suggestions({ tourId, lang, onAdded }: { tourId: number; lang: string; 
                     <span className="font-mono tabular-nums">{formatTimeInput(s.cueStartMs)}</span>
                   </p>
                   <p className="font-bold">
-                    {s.cultivar.acceptedName} <FictionalMark record={s.cultivar} />
+                    <CultivarName record={s.cultivar} /> <FictionalMark record={s.cultivar} />
                   </p>
                   <p className="text-ink-soft">
                     <span className="font-mono tabular-nums">{span(s)}</span> · found by {KIND_WORDS[s.kind]}
