@@ -27,7 +27,14 @@ export const displayNameSchema = z
   .max(60, 'Use at most 60 characters.')
   .refine((s) => !/[<>]/.test(s), 'Angle brackets are not allowed in a name.');
 
-export const signUpInput = z.object({ displayName: displayNameSchema, email: emailSchema, password: passwordSchema });
+export const signUpInput = z.object({
+  displayName: displayNameSchema,
+  email: emailSchema,
+  password: passwordSchema,
+  /** Units and zone the person chose as a visitor on this browser; the new account starts with them. */
+  unitSystem: z.enum(['metric', 'imperial']).optional(),
+  hardinessZone: z.enum(USDA_ZONES).nullable().optional(),
+});
 export type SignUpInput = z.infer<typeof signUpInput>;
 
 export const signInInput = z.object({

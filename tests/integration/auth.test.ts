@@ -57,6 +57,26 @@ describe('sign up, verify by e-mail, sign in, sign out', () => {
     expect(row.passwordHash).not.toContain('a-long-enough-pass');
   });
 
+  it('starts a new account with the units and zone chosen as a visitor, and refuses an unknown zone', async () => {
+    const a = server.agent();
+    const email = 'visiting.member@test.example';
+    const up = await a.post('/api/auth/sign-up', { displayName: 'Visiting Member', email, password: 'a-long-enough-pass', unitSystem: 'imperial', hardinessZone: '6b' });
+    expect(up.status).toBe(201);
+    const token = linkToken((await waitForMail(admin, email, 'Confirm your e-mail')).text, '/verify');
+    const verified = await a.post('/api/auth/verify', { token });
+    expect(verified.body.user).toMatchObject({ email, unitSystem: 'imperial', hardinessZone: '6b' });
+
+    // USDA zones run 1a to 13b (USDA Plant Hardiness Zone Map, 2023).
+    const bad = await server.agent().post('/api/auth/sign-up', { displayName: 'Odd Zone', email: 'odd.zone@test.example', password: 'a-long-enough-pass', hardinessZone: '14a' });
+    expect(bad.status).toBe(400);
+    expect(bad.body.error.fields).toHaveProperty('hardinessZone');
+    // Without them, the defaults.
+    const plain = await server.agent().post('/api/auth/sign-up', { displayName: 'Plain Member', email: 'plain.member@test.example', password: 'a-long-enough-pass' });
+    expect(plain.status).toBe(201);
+    const [row] = await server.dataSource.query('SELECT unit_system AS u, hardiness_zone AS z FROM users WHERE email = ?', ['plain.member@test.example']);
+    expect(row).toEqual({ u: 'metric', z: null });
+  });
+
   it('sets an HttpOnly, SameSite=Lax session cookie', async () => {
     const u = await makeUser(server.dataSource, 'viewer');
     const a = server.agent();

@@ -48,7 +48,15 @@ export class AuthService {
           email: 'Already registered.',
         });
       }
-      const u = await m.getRepository(User).save(m.getRepository(User).create({ email: input.email, displayName: input.displayName, passwordHash }));
+      const u = await m.getRepository(User).save(
+        m.getRepository(User).create({
+          email: input.email,
+          displayName: input.displayName,
+          passwordHash,
+          ...(input.unitSystem ? { unitSystem: input.unitSystem } : {}),
+          ...(input.hardinessZone ? { hardinessZone: input.hardinessZone } : {}),
+        }),
+      );
       await m.getRepository(AuthToken).insert({ userId: u.id, purpose: 'verify', tokenHash: hash, expiresAt: new Date(Date.now() + VERIFY_TTL_MS) });
       return u;
     });

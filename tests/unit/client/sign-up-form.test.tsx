@@ -6,6 +6,7 @@ import { afterEach, beforeEach, describe, expect, it, vi } from 'vitest';
 import { PASSWORD_MIN } from '@shared/schemas/auth';
 import { SignInForm } from '@/features/accounts/components/sign-in-page';
 import { SignUpForm } from '@/features/accounts/components/sign-up-page';
+import { READER_PREFS_STORAGE_KEY, serializePrefs } from '@/features/preferences/lib/reader-prefs';
 import { forgetCsrfToken } from '@/lib/api';
 
 // Accessibility expectations checked here follow WAI-ARIA 1.2 (aria-invalid, aria-describedby,
@@ -29,6 +30,7 @@ function describedText(input: HTMLElement): string {
 const fetchMock = vi.fn<typeof fetch>();
 
 beforeEach(() => {
+  window.localStorage.clear();
   forgetCsrfToken();
   fetchMock.mockReset();
   vi.stubGlobal('fetch', fetchMock);
@@ -92,6 +94,32 @@ describe('sign-up form validation display', () => {
     fireEvent.change(screen.getByLabelText('Password'), { target: { value: 'a long invented passphrase' } });
     fireEvent.click(screen.getByRole('button', { name: 'Create account' }));
     await waitFor(() => expect(onDone).toHaveBeenCalledWith('ivy@invented.example'));
+  });
+});
+
+describe('sign-up carries the visitor’s choices', () => {
+  it('sends the units and zone chosen on this browser, and says so above the button', async () => {
+    window.localStorage.setItem(READER_PREFS_STORAGE_KEY, serializePrefs({ unitSystem: 'imperial', zone: '6b', container: true }));
+    fetchMock.mockImplementation(async (input) =>
+      String(input) === '/api/auth/csrf' ? Response.json({ token: 'test-token' }) : Response.json({ ok: true }, { status: 201 }),
+    );
+    const onDone = vi.fn();
+    wrap(<SignUpForm onDone={onDone} />);
+    expect(screen.getByText(/feet and inches and hardiness zone 6b on this browser comes with the new account/)).toBeTruthy();
+    fireEvent.change(screen.getByLabelText('Display name'), { target: { value: 'Invented Ivy' } });
+    fireEvent.change(screen.getByLabelText('E-mail'), { target: { value: 'ivy@invented.example' } });
+    fireEvent.change(screen.getByLabelText('Password'), { target: { value: 'a long invented passphrase' } });
+    fireEvent.click(screen.getByRole('button', { name: 'Create account' }));
+    await waitFor(() => expect(onDone).toHaveBeenCalled());
+    const post = fetchMock.mock.calls.find(([url]) => String(url) === '/api/auth/sign-up');
+    // The container choice stays in the browser: the account has no place for it.
+    expect(JSON.parse(String(post?.[1]?.body))).toEqual({
+      displayName: 'Invented Ivy',
+      email: 'ivy@invented.example',
+      password: 'a long invented passphrase',
+      unitSystem: 'imperial',
+      hardinessZone: '6b',
+    });
   });
 });
 

@@ -8,6 +8,7 @@ import { Page } from '@/components/page';
 import { TextField } from '@/components/text-field';
 import { errorMessage, isApiError } from '@/lib/api';
 import { useSchemaForm } from '@/lib/use-schema-form';
+import { browserAccountPrefs } from '@/features/preferences/hooks/use-reader-prefs';
 import { useSignUp } from '../api/account-api';
 import { ResendLinkButton } from './resend-link';
 
@@ -15,9 +16,11 @@ import { ResendLinkButton } from './resend-link';
 export function SignUpForm({ onDone }: { onDone: (email: string) => void }) {
   const signUp = useSignUp();
   const { errors, onSubmit, showServerErrors } = useSchemaForm(signUpInput, (data) =>
-    signUp.mutate(data, { onSuccess: () => onDone(data.email), onError: showServerErrors }),
+    signUp.mutate({ ...data, ...browserAccountPrefs() }, { onSuccess: () => onDone(data.email), onError: showServerErrors }),
   );
   const taken = isApiError(signUp.error, 'email_taken');
+  const carried = browserAccountPrefs();
+  const carriedText = [carried.unitSystem === 'imperial' ? 'feet and inches' : null, carried.hardinessZone ? `hardiness zone ${carried.hardinessZone}` : null].filter(Boolean).join(' and ');
 
   return (
     <form noValidate onSubmit={onSubmit} className="space-y-5">
@@ -37,6 +40,7 @@ export function SignUpForm({ onDone }: { onDone: (email: string) => void }) {
         hint={`At least ${PASSWORD_MIN} characters. A few unrelated words make a strong one.`}
         error={errors.password}
       />
+      {carriedText && <p className="text-sm text-ink-soft">Your choice of {carriedText} on this browser comes with the new account.</p>}
       <FormError message={signUp.isError ? errorMessage(signUp.error) : null}>
         {taken && (
           <p>

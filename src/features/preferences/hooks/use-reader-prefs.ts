@@ -40,6 +40,17 @@ function writeLocal(patch: Partial<ReaderPrefs>): void {
   for (const l of listeners) l();
 }
 
+/**
+ * The units and zone chosen on this browser, as a new account takes them (sign-up), so choices
+ * made as a visitor are not lost on joining. Nothing when none were chosen.
+ */
+export function browserAccountPrefs(): { unitSystem?: UnitSystem; hardinessZone?: UsdaZone } {
+  const raw = readRaw();
+  if (!raw) return {};
+  const stored = parseStoredPrefs(raw);
+  return { unitSystem: stored.unitSystem, ...(stored.zone ? { hardinessZone: stored.zone } : {}) };
+}
+
 /** What `useReaderPrefs` gives a screen. */
 export interface ReaderPrefsState {
   prefs: ReaderPrefs;
