@@ -107,6 +107,12 @@ export const whereToSeeResponseSchema = z.object({
 /** The "where to see it" answer. */
 export type WhereToSeeResponse = z.infer<typeof whereToSeeResponseSchema>;
 
+/** GET /api/authors: everyone with a published tour, by name (the browse filter's choices). */
+export const authorListSchema = z.object({
+  items: z.array(z.object({ id: z.number(), displayName: z.string(), publishedTours: z.number() })),
+});
+export type AuthorList = z.infer<typeof authorListSchema>;
+
 /** GET /api/authors/:id: a public author page. */
 export const authorPageSchema = z.object({
   author: z.object({

@@ -6,7 +6,7 @@ import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import type { Cultivar } from '../../server/db/entities/cultivar.entity';
 import type { Tour } from '../../server/db/entities/tour.entity';
 import { User } from '../../server/db/entities/user.entity';
-import { authorPageSchema } from '../../shared/schemas/watch';
+import { authorListSchema, authorPageSchema } from '../../shared/schemas/watch';
 import { tourPage } from '../../shared/schemas/tours';
 import { makeCultivarRow } from '../support/caption-fixtures';
 import { agentAs, makeUser } from '../support/fixtures';
@@ -81,6 +81,25 @@ describe('GET /api/tours browse filters', () => {
     expect(ids((await list(`cultivar=${lace.slug}&author=${authorUser.id}&garden=corner`)).body)).toEqual([t1.id]);
     expect((await list(`cultivar=${lace.slug}`, author)).body.items.map((t: { state: string }) => t.state)).toEqual(['published', 'published']);
     expect((await list(`garden=${'x'.repeat(161)}`)).status).toBe(400);
+  });
+});
+
+describe('GET /api/authors', () => {
+  it('lists everyone with a published tour, by name, with how many: drafts and disabled accounts aside', async () => {
+    const r = await anonymous.get('/api/authors');
+    expect(r.status).toBe(200);
+    authorListSchema.parse(r.body);
+    // Ada has two published tours and a draft; Bram one.
+    expect(r.body.items).toEqual([
+      { id: authorUser.id, displayName: 'Ada Fernhollow (fictional)', publishedTours: 2 },
+      { id: otherUser.id, displayName: 'Bram Quarry (fictional)', publishedTours: 1 },
+    ]);
+    await server.dataSource.getRepository(User).update({ id: otherUser.id }, { disabledAt: new Date() });
+    try {
+      expect((await anonymous.get('/api/authors')).body.items.map((a: { id: number }) => a.id)).toEqual([authorUser.id]);
+    } finally {
+      await server.dataSource.getRepository(User).update({ id: otherUser.id }, { disabledAt: null });
+    }
   });
 });
 

@@ -14,6 +14,18 @@ export class AuthorService {
     private readonly tours: TourService,
   ) {}
 
+  /** Everyone with a published tour (disabled accounts aside), by display name, with how many. */
+  async withPublishedTours(): Promise<{ id: number; displayName: string; publishedTours: number }[]> {
+    const rows = (await this.dataSource.query(
+      `SELECT u.id AS id, u.display_name AS displayName, COUNT(*) AS publishedTours
+       FROM tours t JOIN users u ON u.id = t.author_id
+       WHERE t.state = 'published' AND u.disabled_at IS NULL
+       GROUP BY u.id, u.display_name
+       ORDER BY u.display_name, u.id`,
+    )) as { id: number | string; displayName: string; publishedTours: number | string }[];
+    return rows.map((r) => ({ id: Number(r.id), displayName: r.displayName, publishedTours: Number(r.publishedTours) }));
+  }
+
   /** The author and one page of their published tours (newest first). */
   async page(id: number, page: number, pageSize: number) {
     const user = await this.dataSource.getRepository(User).findOneBy({ id });

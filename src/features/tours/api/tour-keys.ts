@@ -28,5 +28,7 @@ export const tourKeys = {
   /** The cultivar record a browse filter names (for its printed name). */
   browseRecord: (slug: string) => [...tourKeys.all, 'browse-record', slug] as const,
   authors: () => [...tourKeys.all, 'author'] as const,
+  /** Everyone with a published tour (the browse filter's author choices). */
+  authorList: () => [...tourKeys.authors(), 'list'] as const,
   author: (id: number, page: number) => [...tourKeys.authors(), id, page] as const,
 };

@@ -1,7 +1,7 @@
 import { queryOptions, useQuery } from '@tanstack/react-query';
 import { z } from 'zod';
 import { storedCueSchema, trackSchema } from '@shared/schemas/captions';
-import { authorPageSchema, watchResponseSchema, type AuthorPage, type WatchResponse } from '@shared/schemas/watch';
+import { authorListSchema, authorPageSchema, watchResponseSchema, type AuthorPage, type WatchResponse } from '@shared/schemas/watch';
 import { api } from '@/lib/api';
 import { tourKeys } from './tour-keys';
 
@@ -38,6 +38,15 @@ export function trackCuesQueryOptions(trackId: number, version: number) {
 export const AUTHOR_TOURS_PAGE_SIZE = 12;
 
 /** Query options for an author's page. */
+/** Everyone with a published tour, by name. */
+export function authorListQueryOptions() {
+  return queryOptions({
+    queryKey: tourKeys.authorList(),
+    queryFn: ({ signal }) => api.get('/api/authors', { schema: authorListSchema, signal }).then((r) => r.items),
+    staleTime: 5 * 60_000,
+  });
+}
+
 export function authorPageQueryOptions(id: number, page: number) {
   return queryOptions({ queryKey: tourKeys.author(id, page), queryFn: ({ signal }) => fetchAuthorPage(id, page, AUTHOR_TOURS_PAGE_SIZE, signal) });
 }

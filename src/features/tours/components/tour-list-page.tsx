@@ -15,17 +15,14 @@ import { Loading } from '@/components/spinner';
 import { api } from '@/lib/api';
 import { useMe } from '@/lib/auth';
 import { tourKeys } from '../api/tour-keys';
-import { publicToursQueryOptions, usePublicTours } from '../api/tours-api';
-import { authorPageQueryOptions } from '../api/watch-api';
+import { usePublicTours } from '../api/tours-api';
+import { authorListQueryOptions, authorPageQueryOptions } from '../api/watch-api';
 import { BROWSE_GROUPS, filtersFromParams, hasFilters, listParams, paramsFromFilters, type BrowseFilters } from '../lib/browse-filters';
 import { pageFromParams } from '../lib/page-param';
 import { TourCard } from './tour-card';
 
 /** Tours per page of the public list (four rows of three on a wide screen). */
 export const TOURS_PAGE_SIZE = 12;
-
-/** How many published tours the author choices are drawn from (a club-sized list). */
-const AUTHOR_SOURCE_SIZE = 100;
 
 const recordResponse = z.object({ cultivar: cultivarSummarySchema });
 
@@ -39,16 +36,19 @@ function useFilterRecord(slug: string | undefined) {
   });
 }
 
-/** Everyone who has published a tour (from the newest club-sized page), for the author choice. */
+/**
+ * Everyone who has published a tour, for the author choice; an author named in the address but
+ * with no published tour left (or not yet listed) stays choosable, so the filter shown is true.
+ */
 function useAuthorChoices(current: number | undefined) {
-  const tours = useQuery({ ...publicToursQueryOptions({ page: 1, pageSize: AUTHOR_SOURCE_SIZE }), placeholderData: undefined });
+  const list = useQuery(authorListQueryOptions());
   const currentAuthor = useQuery({ ...authorPageQueryOptions(current ?? 0, 1), enabled: current != null });
   return useMemo(() => {
     const byId = new Map<number, string>();
-    for (const t of tours.data?.items ?? []) byId.set(t.author.id, t.author.displayName);
-    if (current != null && currentAuthor.data) byId.set(current, currentAuthor.data.author.displayName);
+    for (const a of list.data ?? []) byId.set(a.id, a.displayName);
+    if (current != null && currentAuthor.data && !byId.has(current)) byId.set(current, currentAuthor.data.author.displayName);
     return [...byId.entries()].map(([id, name]) => ({ id, name })).sort((a, b) => a.name.localeCompare(b.name));
-  }, [tours.data, currentAuthor.data, current]);
+  }, [list.data, currentAuthor.data, current]);
 }
 
 function FilterForm({ filters, onApply }: { filters: BrowseFilters; onApply: (f: BrowseFilters) => void }) {
