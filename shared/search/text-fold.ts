@@ -29,8 +29,12 @@ function foldChar(ch: string): string {
   return ch.normalize('NFKD').replace(/\p{M}+/gu, '').toLowerCase();
 }
 
+const ASCII = /^[\x00-\x7f]*$/;
+
 /** Lower case, accents removed, ß → ss: the form both sides of a comparison are put in. */
 export function foldText(text: string): string {
+  // Plain ASCII only needs lower case (most captions and names): no per-character work.
+  if (ASCII.test(text)) return text.toLowerCase();
   let out = '';
   for (const ch of text) out += foldChar(ch);
   return out;
@@ -60,9 +64,12 @@ export function foldWithMap(text: string): FoldedText {
  * never reach a query as anything but a word break.
  */
 export function searchWords(q: string): string[] {
-  const out: string[] = [];
-  for (const m of foldText(q).matchAll(WORD_RUN)) if (!out.includes(m[0])) out.push(m[0]);
-  return out;
+  return [...new Set(foldedWords(q))];
+}
+
+/** Every word of `text` in folded form, in order, repeats kept (runs of letters and digits). */
+export function foldedWords(text: string): string[] {
+  return foldText(text).match(WORD_RUN) ?? [];
 }
 
 /** A word to mark in a text: `prefix` also marks words that merely start with it. */

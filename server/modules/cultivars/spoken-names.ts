@@ -2,6 +2,7 @@ import type { DataSource } from 'typeorm';
 import { cuePlainText } from '../../../shared/captions/cue-text';
 import { buildNameIndex, findNames, type NameRecord } from '../../../shared/names/matcher';
 import type { SpokenMoment } from '../../../shared/schemas/cultivars';
+import { readRevisions, RevisionCache } from '../search/search-revisions';
 
 /** Where one record is heard across published tours. */
 export interface SpokenSummary {
@@ -90,47 +91,37 @@ export function spokenByRecord(records: readonly NameRecord[], cues: readonly Pu
 
 /**
  * "Where is this name spoken", for record pages and the glossary. Matching every published cue is
- * done once and kept until captions, published tours, records or variants change; a cheap
- * fingerprint query tells, so several server processes each keep a correct copy.
+ * done once and kept until captions, published tours, records or variants change: the search
+ * revisions (kept by database triggers) tell for tours and records, a cheap checksum query for
+ * caption tracks, so several server processes each keep a correct copy.
  */
 export class SpokenNames {
-  private cache: { key: string; byRecord: Map<number, SpokenSummary> } | null = null;
-  private building: { key: string; promise: Promise<Map<number, SpokenSummary>> } | null = null;
+  private readonly cache: RevisionCache<Map<number, SpokenSummary>>;
 
   constructor(
     private readonly dataSource: DataSource,
     private readonly records: () => Promise<NameRecord[]>,
-  ) {}
+  ) {
+    this.cache = new RevisionCache(async () => {
+      const [records, cues] = await Promise.all([this.records(), publishedCues(this.dataSource)]);
+      return spokenByRecord(records, cues);
+    });
+  }
 
   private async fingerprint(): Promise<string> {
-    const [row]: Record<string, unknown>[] = await this.dataSource.query(
-      `SELECT
-         (SELECT CONCAT(COUNT(*), ':', COALESCE(SUM(t.version), 0), ':', COALESCE(SUM(t.id), 0), ':', COALESCE(MAX(t.updated_at), ''))
-            FROM caption_tracks t JOIN tours r ON r.id = t.tour_id WHERE r.state = 'published') AS tracks,
-         (SELECT CONCAT(COUNT(*), ':', COALESCE(SUM(id), 0), ':', COALESCE(MAX(updated_at), '')) FROM tours WHERE state = 'published') AS tours,
-         (SELECT CONCAT(COUNT(*), ':', COALESCE(SUM(id), 0), ':', COALESCE(MAX(updated_at), '')) FROM cultivars WHERE status = 'approved' AND merged_into_id IS NULL) AS cultivars,
-         (SELECT CONCAT(COUNT(*), ':', COALESCE(SUM(id), 0), ':', COALESCE(MAX(id), 0), ':', COALESCE(SUM(cultivar_id), 0)) FROM cultivar_variants) AS variants`,
-    );
-    return [row?.tracks, row?.tours, row?.cultivars, row?.variants].map(String).join('|');
+    const [[row], revisions] = await Promise.all([
+      this.dataSource.query(
+        `SELECT CONCAT(COUNT(*), ':', COALESCE(SUM(t.version), 0), ':', COALESCE(SUM(t.id), 0), ':', COALESCE(MAX(t.updated_at), '')) AS tracks
+         FROM caption_tracks t JOIN tours r ON r.id = t.tour_id WHERE r.state = 'published'`,
+      ) as Promise<{ tracks: string }[]>,
+      readRevisions(this.dataSource),
+    ]);
+    return [row?.tracks, revisions.tours, revisions.catalogue].map(String).join('|');
   }
 
   /** Every approved record heard somewhere, by record id. */
   async all(): Promise<Map<number, SpokenSummary>> {
-    const key = await this.fingerprint();
-    if (this.cache?.key === key) return this.cache.byRecord;
-    if (this.building?.key === key) return this.building.promise;
-    const promise = (async () => {
-      const [records, cues] = await Promise.all([this.records(), publishedCues(this.dataSource)]);
-      return spokenByRecord(records, cues);
-    })();
-    this.building = { key, promise };
-    try {
-      const byRecord = await promise;
-      this.cache = { key, byRecord };
-      return byRecord;
-    } finally {
-      if (this.building?.promise === promise) this.building = null;
-    }
+    return this.cache.get(await this.fingerprint());
   }
 
   /** Where one record is heard (nothing for proposals and retired records: they are not matched). */

@@ -41,7 +41,7 @@ export interface CueHit {
   lang: string;
   startMs: number;
   endMs: number;
-  /** The cue text, once loaded (ranking never needs it; see `loadTexts`). */
+  /** The cue text, once loaded (ranking never needs it; see `loadCueTexts`). */
   rawText: string | null;
   score: number;
   tourDate: string | null;
@@ -187,16 +187,15 @@ interface ToursRead {
 
 /** A cue row as the tour reads return it, before its track is known. */
 interface CueRow {
-  listSum: string;
   cueId: number | string;
   trackId: number | string;
   startMs: number | string;
   endMs: number | string;
-  score: number | string;
+  score: number | string | null;
 }
 
-function trackHit(r: CueRow, track: TrackInOrder): CueHit {
-  // Built directly, without an intermediate row object: tour reads return hundreds of hits.
+/** A hit from a cue row and the track it belongs to (as the row says, or as the track list says). */
+function hitOf(r: CueRow, track: Omit<TrackInOrder, 'trackId'>): CueHit {
   return {
     cueId: Number(r.cueId),
     trackId: Number(r.trackId),
@@ -214,20 +213,7 @@ function trackHit(r: CueRow, track: TrackInOrder): CueHit {
 }
 
 function toHit(r: Row): CueHit {
-  return {
-    cueId: Number(r.cueId),
-    trackId: Number(r.trackId),
-    tourId: Number(r.tourId),
-    lang: r.lang,
-    startMs: Number(r.startMs),
-    endMs: Number(r.endMs),
-    rawText: null,
-    score: Number(r.score ?? 0),
-    tourDate: dateString(r.tourDate),
-    nameHit: false,
-    cultivarIds: [],
-    nameSpans: [],
-  };
+  return hitOf(r, { tourId: Number(r.tourId), lang: r.lang, tourDate: dateString(r.tourDate) });
 }
 
 /** The order of ORDER in JavaScript (scores compared exactly, as the server compares them). */
@@ -343,11 +329,6 @@ export class CaptionSearch {
       }
     }
     return this.limits;
-  }
-
-  /** Loads the text of hits that lack it (one query). */
-  loadTexts(hits: readonly CueHit[]): Promise<void> {
-    return loadCueTexts(this.dataSource, hits);
   }
 
   /** Splits folded words for this server. */
@@ -588,13 +569,13 @@ export class CaptionSearch {
          AND t.state = 'published'${andAlso(extra)}
        HAVING score > 0`,
       [against, ...chunk.map((c) => c.trackId), ...probeIds, ...extra.params],
-    )) as CueRow[];
+    )) as (CueRow & { listSum: string })[];
     const hits: CueHit[] = [];
     const probeScores = new Map<number, number>();
     for (const r of rows) {
       if (probeSet.has(Number(r.cueId))) probeScores.set(Number(r.cueId), Number(r.score));
       const track = byTrack.get(Number(r.trackId));
-      if (track) hits.push(trackHit(r, track));
+      if (track) hits.push(hitOf(r, track));
     }
     return { hits, next, cues: cuesBefore + cues, probes: probeScores, listSum: rows[0]?.listSum ?? null };
   }
@@ -661,7 +642,7 @@ export class CaptionSearch {
     const wanted = new Set(targets.map((t) => t.id));
     const out: CueHit[] = [];
     const taken = new Set<number>();
-    await this.loadTexts(hits);
+    await loadCueTexts(this.dataSource, hits);
     for (const hit of hits) {
       if (taken.has(hit.cueId)) continue;
       const plain = plainCueText(hit.rawText ?? '');
@@ -684,7 +665,7 @@ export function plainCueText(text: string): string {
 }
 
 /** Fills in `rawText` of the hits that lack it, in one query by primary key. */
-export async function loadCueTexts(dataSource: DataSource, hits: readonly CueHit[]): Promise<void> {
+async function loadCueTexts(dataSource: DataSource, hits: readonly CueHit[]): Promise<void> {
   const missing = hits.filter((h) => h.rawText === null);
   if (!missing.length) return;
   const ids = [...new Set(missing.map((h) => h.cueId))];

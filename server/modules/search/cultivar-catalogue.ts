@@ -3,7 +3,7 @@ import { buildNameIndex, type NameIndex } from '../../../shared/names/matcher';
 import { normalizeName } from '../../../shared/names/normalize';
 import { Cultivar } from '../../db/entities/cultivar.entity';
 import { CultivarVariant } from '../../db/entities/cultivar-variant.entity';
-import { readRevisions, RevisionCache } from './search-revisions';
+import { RevisionCache } from './search-revisions';
 
 /** One searchable record with its spellings in comparison form. */
 export interface CatalogueRecord {
@@ -56,8 +56,8 @@ export class CultivarCatalogue {
     return { records, byId: new Map(records.map((r) => [r.cultivar.id, r])), index };
   }
 
-  /** The catalogue as of `revision` (read now when not given): kept, or rebuilt when the records changed. */
-  async get(revision?: string): Promise<Catalogue> {
-    return this.cache.get(revision ?? (await readRevisions(this.dataSource)).catalogue);
+  /** The catalogue as of `revision` (see `readRevisions`): kept, or rebuilt when the records changed. */
+  get(revision: string): Promise<Catalogue> {
+    return this.cache.get(revision);
   }
 }

@@ -1,8 +1,9 @@
 import type { DataSource } from 'typeorm';
 
 /**
- * What search keeps in memory, each with a revision that database triggers replace, in the same
- * transaction, whenever its source changes (migration 1796174200000-search-revisions):
+ * What search (and the "where is this name spoken" summaries) keeps in memory, each with a
+ * revision that database triggers replace, in the same transaction, whenever its source changes
+ * (migration 1796174200000-search-revisions):
  * - `catalogue`: cultivar records and their spellings;
  * - `tours`: published tours (publishing, withdrawing, any edit) and their authors' names.
  */

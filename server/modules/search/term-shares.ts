@@ -1,5 +1,5 @@
 import type { DataSource } from 'typeorm';
-import { foldText } from '../../../shared/search/text-fold';
+import { foldedWords } from '../../../shared/search/text-fold';
 
 /** Cues read per statement while counting (keeps memory flat and lets searches run in between). */
 const PAGE = 20_000;
@@ -11,8 +11,6 @@ const MAX_DRIFT = 0.2;
 const MIN_INTERVAL_MS = 5 * 60_000;
 const RETRY_FIRST_MS = 10_000;
 
-const WORD_RUN = /[\p{L}\p{N}]+/gu;
-const ASCII = /^[\x00-\x7f]*$/;
 
 /** Most times a word is counted as said in one cue (a cue saying it more often counts as this many). */
 export const TIMES_COUNTED = 4;
@@ -39,11 +37,10 @@ export interface TermEstimate {
   atLeast: number[] | null;
 }
 
-/** Folded words of one cue with how often each is said (ASCII text skips the per-character fold). */
+/** Folded words of one cue with how often each is said. */
 export function cueWords(text: string): Map<string, number> {
-  const folded = ASCII.test(text) ? text.toLowerCase() : foldText(text);
   const out = new Map<string, number>();
-  for (const w of folded.match(WORD_RUN) ?? []) out.set(w, (out.get(w) ?? 0) + 1);
+  for (const w of foldedWords(text)) out.set(w, (out.get(w) ?? 0) + 1);
   return out;
 }
 

@@ -3,7 +3,7 @@
 // MariaDB's ft_boolean_syntax default "+ -><()~*:""&|" (MariaDB documentation). Whether the folding
 // agrees with the database collation is checked against MariaDB itself in tests/integration/search.test.ts.
 import { describe, expect, it } from 'vitest';
-import { foldText, foldWithMap, markWords, mergeSpans, searchWords, snippetAround } from '../../../shared/search/text-fold';
+import { foldedWords, foldText, foldWithMap, markWords, mergeSpans, searchWords, snippetAround } from '../../../shared/search/text-fold';
 
 describe('foldText', () => {
   it('removes accents after NFKD decomposition and lower-cases (UAX #15)', () => {
@@ -14,6 +14,21 @@ describe('foldText', () => {
   });
   it('expands ß to ss (common practice in collations; checked against MariaDB in the integration test)', () => {
     expect(foldText('Straße')).toBe('strasse');
+  });
+});
+
+describe('foldText on plain ASCII', () => {
+  it('gives what NFKD plus lower case gives for every ASCII character, alone and mixed with accented text (UAX #15)', () => {
+    const all = Array.from({ length: 128 }, (_, i) => String.fromCharCode(i)).join('');
+    const byDefinition = (t: string) => t.normalize('NFKD').replace(/\p{M}+/gu, '').toLowerCase();
+    expect(foldText(all)).toBe(byDefinition(all));
+    expect(foldText(`${all}é`)).toBe(`${byDefinition(all)}e`);
+  });
+});
+
+describe('foldedWords', () => {
+  it('keeps every word in order, repeats included', () => {
+    expect(foldedWords('Érable, érable and the <i>Érable</i>.')).toEqual(['erable', 'erable', 'and', 'the', 'i', 'erable', 'i']);
   });
 });
 
