@@ -27,14 +27,14 @@ export const displayNameSchema = z
   .max(60, 'Use at most 60 characters.')
   .refine((s) => !/[<>]/.test(s), 'Angle brackets are not allowed in a name.');
 
-export const signUpInput = z.object({
-  displayName: displayNameSchema,
-  email: emailSchema,
-  password: passwordSchema,
-  /** Units and zone the person chose as a visitor on this browser; the new account starts with them. */
+/** A reader's units and USDA zone (1a–13b, or null to forget it), as an account keeps them. */
+const accountPrefsFields = {
   unitSystem: z.enum(['metric', 'imperial']).optional(),
   hardinessZone: z.enum(USDA_ZONES).nullable().optional(),
-});
+};
+
+/** A new account; the units and zone chosen as a visitor on this browser come with it. */
+export const signUpInput = z.object({ displayName: displayNameSchema, email: emailSchema, password: passwordSchema, ...accountPrefsFields });
 export type SignUpInput = z.infer<typeof signUpInput>;
 
 export const signInInput = z.object({
@@ -57,12 +57,7 @@ export const changePasswordInput = z
   .refine((v) => v.currentPassword !== v.newPassword, { path: ['newPassword'], message: 'Choose a password you have not used here just now.' });
 export type ChangePasswordInput = z.infer<typeof changePasswordInput>;
 
-export const updateAccountInput = z.object({
-  displayName: displayNameSchema.optional(),
-  unitSystem: z.enum(['metric', 'imperial']).optional(),
-  /** USDA zone 1a–13b, or null to forget it. */
-  hardinessZone: z.enum(USDA_ZONES).nullable().optional(),
-});
+export const updateAccountInput = z.object({ displayName: displayNameSchema.optional(), ...accountPrefsFields });
 export type UpdateAccountInput = z.infer<typeof updateAccountInput>;
 
 /** The signed-in user as the client sees it: no hashes, tokens or internal flags. */

@@ -111,7 +111,6 @@ export type WhereToSeeResponse = z.infer<typeof whereToSeeResponseSchema>;
 export const authorListSchema = z.object({
   items: z.array(z.object({ id: z.number(), displayName: z.string(), publishedTours: z.number() })),
 });
-export type AuthorList = z.infer<typeof authorListSchema>;
 
 /** GET /api/authors/:id: a public author page. */
 export const authorPageSchema = z.object({

@@ -104,7 +104,7 @@ describe('a learner narrows down a tree with the finder and compares it with its
     await expect.poll(() => candidates(page).first().getByRole('heading').textContent(), WAIT).toContain('Sora-no-hane');
     const top = candidates(page).first();
     // Three of three answers match: (3 + 0.5) / (3 + 1) = 87.5 %, shown rounded (hand-worked from the scoring rule in shared/finder/score.ts).
-    expect(await top.getByText(/^fits your answers: \d+%$/).textContent()).toBe('fits your answers: 88%');
+    expect(await top.getByText(/^Fits your answers: \d+%$/).textContent()).toBe('Fits your answers: 88%');
     expect(await top.getByText('Invented for the demo').count()).toBe(1);
     // The lime-green twin conflicts on spring colour and says so with a mark, not colour alone.
     const twin = candidates(page).filter({ hasText: 'Mizu-kagari' });
@@ -147,13 +147,20 @@ describe('a learner narrows down a tree with the finder and compares it with its
 });
 
 describe('pair notes', () => {
-  it('an author writes how to tell the pair apart; readers see it as paragraphs', async () => {
+  it('an author writes how to tell the pair apart with the editor; readers see its paragraphs and bold words', async () => {
     await signIn(page, AUTHOR.email, AUTHOR.password);
     await page.goto(compareUrl);
     await page.getByRole('button', { name: 'Write a note' }).click();
-    await page.getByRole('textbox', { name: 'How to tell them apart' }).fill('In spring one is deep red, its twin lime (fictional demo note).\n\nIn winter the twin has green bark.');
+    await page.getByRole('textbox', { name: 'How to tell them apart' }).click();
+    await page.keyboard.type('In spring one is deep red, its twin lime (fictional demo note).');
+    await page.keyboard.press('Enter');
+    await page.keyboard.type('In winter the twin has ');
+    await page.getByRole('button', { name: 'Bold (Ctrl+B)' }).click();
+    await page.keyboard.type('green bark.');
     await page.getByRole('button', { name: 'Save the note' }).click();
     await expect.poll(() => page.getByText('In winter the twin has green bark.').count(), WAIT).toBe(1);
+    // The formatting is kept: the bold words come back bold.
+    expect(await page.locator('strong', { hasText: 'green bark.' }).count()).toBe(1);
     await signOut(page);
     await page.goto(compareUrl);
     const note = page.getByRole('region', { name: /and 'Mizu-kagari'|'Mizu-kagari' and/ });

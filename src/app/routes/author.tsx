@@ -1,7 +1,7 @@
 import { useParams, type LoaderFunctionArgs } from 'react-router';
 import { authorPageQueryOptions } from '@/features/tours/api/watch-api';
 import { AuthorPage } from '@/features/tours/components/author-page';
-import { pageFromParams } from '@/features/tours/lib/page-param';
+import { pageFromParams } from '@/lib/route-params';
 import { queryClient } from '@/lib/query-client';
 import { positiveIntParam } from '@/lib/route-params';
 import { NotFoundRoute } from './not-found';

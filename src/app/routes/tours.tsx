@@ -2,7 +2,7 @@ import type { LoaderFunctionArgs } from 'react-router';
 import { publicToursQueryOptions } from '@/features/tours/api/tours-api';
 import { TOURS_PAGE_SIZE, TourListPage } from '@/features/tours/components/tour-list-page';
 import { filtersFromParams, listParams } from '@/features/tours/lib/browse-filters';
-import { pageFromParams } from '@/features/tours/lib/page-param';
+import { pageFromParams } from '@/lib/route-params';
 import { queryClient } from '@/lib/query-client';
 
 /** Fetches the page of tours the address asks for (with its browse filters) while the page's code is set up. */

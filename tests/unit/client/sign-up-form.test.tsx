@@ -105,7 +105,7 @@ describe('sign-up carries the visitor’s choices', () => {
     );
     const onDone = vi.fn();
     wrap(<SignUpForm onDone={onDone} />);
-    expect(screen.getByText(/feet and inches and hardiness zone 6b on this browser comes with the new account/)).toBeTruthy();
+    expect(screen.getByText(/Your new account starts with the settings chosen on this browser: feet and inches, zone 6b./)).toBeTruthy();
     fireEvent.change(screen.getByLabelText('Display name'), { target: { value: 'Invented Ivy' } });
     fireEvent.change(screen.getByLabelText('E-mail'), { target: { value: 'ivy@invented.example' } });
     fireEvent.change(screen.getByLabelText('Password'), { target: { value: 'a long invented passphrase' } });

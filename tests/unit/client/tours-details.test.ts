@@ -2,7 +2,7 @@ import { describe, expect, it } from 'vitest';
 import { updateTourInput } from '@shared/schemas/tours';
 import { changedDetails, detailsInputFrom } from '@/features/tours/lib/details';
 import { linkTarget } from '@/lib/link-target';
-import { pageFromParams } from '@/features/tours/lib/page-param';
+import { pageFromParams } from '@/lib/route-params';
 import { pickRendition } from '@/features/tours/lib/renditions';
 
 // Invented data for the fictional Fernhollow Maple Circle.
@@ -55,6 +55,9 @@ describe('pageFromParams', () => {
   it('reads whole positive numbers and falls back to 1 otherwise', () => {
     expect(pageFromParams(new URLSearchParams('page=3'))).toBe(3);
     for (const bad of ['page=0', 'page=-2', 'page=2.5', 'page=abc', 'page=', '']) expect(pageFromParams(new URLSearchParams(bad))).toBe(1);
+    // The server's own limit (pageQuerySchema): page 100,000 is the last it answers.
+    expect(pageFromParams(new URLSearchParams('page=100000'))).toBe(100_000);
+    expect(pageFromParams(new URLSearchParams('page=100001'))).toBe(1);
   });
 });
 

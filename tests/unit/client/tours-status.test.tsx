@@ -101,7 +101,7 @@ describe('My tours', () => {
     expect(bar.getAttribute('aria-valuenow')).toBe('42');
     expect(bar.getAttribute('aria-valuetext')).toBe('42 % · about 35 seconds left');
     expect(screen.getByText('The video stream ends early: the file looks cut off.')).toBeTruthy();
-    expect(screen.getByText('Video not prepared')).toBeTruthy();
+    expect(screen.getByText('Video could not be prepared')).toBeTruthy();
     expect(screen.getByText('Published')).toBeTruthy();
     expect(screen.getByRole('link', { name: 'Watch “Autumn terrace (fictional)”' }).getAttribute('href')).toBe('/tours/13');
     expect(calls.find((c) => c.url.startsWith('/api/tours?'))?.url).toContain('mine=1');

@@ -10,11 +10,12 @@ import { TextField } from '@/components/text-field';
 import { errorMessage } from '@/lib/api';
 import { useSignOut } from '@/lib/auth';
 import { useSchemaForm } from '@/lib/use-schema-form';
+import { UNIT_SYSTEM_LABELS } from '@/features/preferences/lib/reader-prefs';
 import { changedProfile, useChangePassword, useUpdateAccount } from '../api/account-api';
 
 const unitChoices = [
-  { value: 'metric', label: 'Metric', example: 'heights in metres, leaves in centimetres' },
-  { value: 'imperial', label: 'Imperial', example: 'heights in feet, leaves in inches' },
+  { value: 'metric', label: UNIT_SYSTEM_LABELS.metric, example: 'heights in metres, leaves in centimetres' },
+  { value: 'imperial', label: UNIT_SYSTEM_LABELS.imperial, example: 'heights in feet, leaves in inches' },
 ] as const;
 
 function ProfileForm({ user }: { user: PublicUser }) {

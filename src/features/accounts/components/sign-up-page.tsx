@@ -8,19 +8,23 @@ import { Page } from '@/components/page';
 import { TextField } from '@/components/text-field';
 import { errorMessage, isApiError } from '@/lib/api';
 import { useSchemaForm } from '@/lib/use-schema-form';
-import { browserAccountPrefs } from '@/features/preferences/hooks/use-reader-prefs';
+import { useBrowserAccountPrefs } from '@/features/preferences/hooks/use-reader-prefs';
+import { UNIT_SYSTEM_LABELS } from '@/features/preferences/lib/reader-prefs';
 import { useSignUp } from '../api/account-api';
 import { ResendLinkButton } from './resend-link';
 
 /** Creating an account: the account stays unconfirmed until the link in the e-mail is opened. */
 export function SignUpForm({ onDone }: { onDone: (email: string) => void }) {
   const signUp = useSignUp();
+  const carried = useBrowserAccountPrefs();
   const { errors, onSubmit, showServerErrors } = useSchemaForm(signUpInput, (data) =>
-    signUp.mutate({ ...data, ...browserAccountPrefs() }, { onSuccess: () => onDone(data.email), onError: showServerErrors }),
+    signUp.mutate({ ...data, ...carried }, { onSuccess: () => onDone(data.email), onError: showServerErrors }),
   );
   const taken = isApiError(signUp.error, 'email_taken');
-  const carried = browserAccountPrefs();
-  const carriedText = [carried.unitSystem === 'imperial' ? 'feet and inches' : null, carried.hardinessZone ? `hardiness zone ${carried.hardinessZone}` : null].filter(Boolean).join(' and ');
+  // Worth saying only when they differ from what a new account starts with.
+  const carriedText = [carried.unitSystem === 'imperial' ? UNIT_SYSTEM_LABELS.imperial.toLowerCase() : null, carried.hardinessZone ? `zone ${carried.hardinessZone}` : null]
+    .filter(Boolean)
+    .join(', ');
 
   return (
     <form noValidate onSubmit={onSubmit} className="space-y-5">
@@ -40,7 +44,7 @@ export function SignUpForm({ onDone }: { onDone: (email: string) => void }) {
         hint={`At least ${PASSWORD_MIN} characters. A few unrelated words make a strong one.`}
         error={errors.password}
       />
-      {carriedText && <p className="text-sm text-ink-soft">Your choice of {carriedText} on this browser comes with the new account.</p>}
+      {carriedText && <p className="text-sm text-ink-soft">Your new account starts with the settings chosen on this browser: {carriedText}.</p>}
       <FormError message={signUp.isError ? errorMessage(signUp.error) : null}>
         {taken && (
           <p>

@@ -7,6 +7,7 @@ import { Page } from '@/components/page';
 import { Pager } from '@/components/pager';
 import { Loading } from '@/components/spinner';
 import { splitLinks } from '@/lib/linkify';
+import { pageFromParams, positiveIntParam } from '@/lib/route-params';
 import { useDebouncedValue } from '@/lib/use-debounced-value';
 import { useOutbox, useOutboxMessage } from '../api/outbox-api';
 
@@ -16,11 +17,6 @@ const timeFormat = new Intl.DateTimeFormat('en-GB', { day: 'numeric', month: 'sh
 function received(iso: string): string {
   const date = new Date(iso);
   return Number.isNaN(date.getTime()) ? iso : timeFormat.format(date);
-}
-
-function positiveInt(raw: string | null): number | null {
-  const n = Number(raw);
-  return Number.isInteger(n) && n > 0 ? n : null;
 }
 
 /** The address with one parameter changed (or removed), keeping the others. */
@@ -100,9 +96,9 @@ function MessageReader({ id, closeSearch }: { id: number; closeSearch: string })
  */
 export function OutboxPage() {
   const [params, setParams] = useSearchParams();
-  const page = positiveInt(params.get('page')) ?? 1;
+  const page = pageFromParams(params);
   const to = params.get('to')?.trim() ?? '';
-  const selected = positiveInt(params.get('message'));
+  const selected = positiveIntParam(params.get('message'));
   const outbox = useOutbox({ page, pageSize: PAGE_SIZE, to: to || undefined });
 
   const [filter, setFilter] = useState(to);

@@ -69,10 +69,10 @@ export function CueEditor(props: CueEditorProps) {
           Add cue at playhead
         </Tool>
         <Tool command="set-start" run={run} disabled={none}>
-          Start cue at playhead
+          Move start to playhead
         </Tool>
         <Tool command="set-end" run={run} disabled={none}>
-          End cue at playhead
+          Move end to playhead
         </Tool>
         <Tool command="nudge-start-back" run={run} disabled={none}>
           Start −0.1 s

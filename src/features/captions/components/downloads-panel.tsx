@@ -48,7 +48,7 @@ export function DownloadsPanel({ tourId, track, unsaved }: { tourId: number; tra
             Stop list (.vtt)
           </a>
           <a className={link} href={stopTrackUrl(tourId, 'metadata')} download={`tour-${tourId}-metadata.vtt`}>
-            Tree cards of the stops (.vtt)
+            Records shown at each stop (.vtt)
           </a>
         </div>
       </section>

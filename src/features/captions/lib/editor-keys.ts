@@ -51,8 +51,8 @@ export interface ShortcutLine {
 /** Every shortcut, in the order the help panel lists them. */
 export const EDITOR_SHORTCUTS: ShortcutLine[] = [
   { keys: ['Alt', 'N'], does: 'New cue at the playhead', aria: 'Alt+N', command: 'add-cue' },
-  { keys: ['Alt', '['], does: 'Start the selected cue at the playhead', aria: 'Alt+BracketLeft', command: 'set-start' },
-  { keys: ['Alt', ']'], does: 'End the selected cue at the playhead', aria: 'Alt+BracketRight', command: 'set-end' },
+  { keys: ['Alt', '['], does: 'Move the selected cue’s start to the playhead', aria: 'Alt+BracketLeft', command: 'set-start' },
+  { keys: ['Alt', ']'], does: 'Move the selected cue’s end to the playhead', aria: 'Alt+BracketRight', command: 'set-end' },
   { keys: ['Alt', '← / →'], does: 'Move the start 0.1 s earlier / later', aria: 'Alt+ArrowLeft Alt+ArrowRight', command: ['nudge-start-back', 'nudge-start-forward'] },
   { keys: ['Alt', 'Shift', '← / →'], does: 'Move the end 0.1 s earlier / later', aria: 'Alt+Shift+ArrowLeft Alt+Shift+ArrowRight', command: ['nudge-end-back', 'nudge-end-forward'] },
   { keys: ['Alt', 'S'], does: 'Split the cue at the playhead (the text at the cursor, or in half by words)', aria: 'Alt+S', command: 'split' },

@@ -2,7 +2,8 @@ import { useId, useState } from 'react';
 import { Button } from '@/components/button';
 import { FormError } from '@/components/form-error';
 import { errorMessage } from '@/lib/api';
-import { notesHtmlToText, textToNotesHtml } from '@/lib/notes-text';
+import { RichTextField } from '@/components/rich-text-field';
+import { richTextClasses } from '@/lib/rich-text';
 import { useSavePairNote, type PairNote as PairNoteDto } from '../api/compare-api';
 
 /** Props of PairNote: one pair, its stored note (if any) and whether this reader may edit it. */
@@ -15,8 +16,8 @@ export interface PairNoteProps {
 }
 
 /**
- * "How to tell them apart" for one pair. Authors and above edit it in a plain text box: blank
- * lines make paragraphs. The server sanitises what is stored, so the note is shown as it comes.
+ * "How to tell them apart" for one pair. Authors and above edit it with the rich-text editor. The
+ * server sanitises what is stored, so the note is shown as it comes.
  */
 export function PairNote({ aId, bId, title, note, canEdit }: PairNoteProps) {
   const id = useId();
@@ -34,22 +35,14 @@ export function PairNote({ aId, bId, title, note, canEdit }: PairNoteProps) {
           className="mt-2 space-y-3"
           onSubmit={(e) => {
             e.preventDefault();
-            save.mutate({ aId, bId, notesHtml: textToNotesHtml(draft) }, { onSuccess: () => setDraft(null) });
+            save.mutate({ aId, bId, notesHtml: draft }, { onSuccess: () => setDraft(null) });
           }}
         >
-          <label htmlFor={`${id}-t`} className="block font-bold">
-            How to tell them apart
-          </label>
-          <p id={`${id}-hint`} className="text-sm text-ink-soft">
-            Plain text. Leave a blank line between paragraphs.
-          </p>
-          <textarea
-            id={`${id}-t`}
-            value={draft}
-            onChange={(e) => setDraft(e.target.value)}
-            rows={6}
-            aria-describedby={`${id}-hint`}
-            className="block w-full rounded-md border border-edge bg-card px-3 py-2 text-base"
+          <RichTextField
+            label="How to tell them apart"
+            hint="What to look at, and when in the year it shows. Bold, italic, lists and links are kept."
+            initialHtml={note?.notesHtml ?? ''}
+            onChange={setDraft}
           />
           <FormError message={save.isError ? errorMessage(save.error) : null} />
           <div className="flex flex-wrap gap-3">
@@ -65,12 +58,12 @@ export function PairNote({ aId, bId, title, note, canEdit }: PairNoteProps) {
         <>
           {note?.notesHtml ? (
             // Sanitised by the server on save and on the way out.
-            <div className="mt-2 space-y-2 [&_a]:underline" dangerouslySetInnerHTML={{ __html: note.notesHtml }} />
+            <div className={`mt-2 ${richTextClasses}`} dangerouslySetInnerHTML={{ __html: note.notesHtml }} />
           ) : (
             <p className="mt-2 text-ink-soft">No note for this pair yet.{canEdit ? '' : ' Authors of the club can add one.'}</p>
           )}
           {canEdit && (
-            <Button variant="secondary" size="sm" className="mt-3" onClick={() => setDraft(note?.notesHtml ? notesHtmlToText(note.notesHtml) : '')}>
+            <Button variant="secondary" size="sm" className="mt-3" onClick={() => setDraft(note?.notesHtml ?? '')}>
               {note?.notesHtml ? 'Edit the note' : 'Write a note'}
             </Button>
           )}

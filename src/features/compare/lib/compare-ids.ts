@@ -1,3 +1,5 @@
+import { positiveIntParam } from '@/lib/route-params';
+
 /** Most records side by side shows at once (the server refuses more). */
 export const MAX_COMPARE = 3;
 
@@ -15,10 +17,8 @@ export interface CompareIds {
 export function parseCompareIds(raw: string | null | undefined): CompareIds {
   const ids: number[] = [];
   for (const part of (raw ?? '').split(',')) {
-    const t = part.trim();
-    if (!/^\d{1,9}$/.test(t)) continue;
-    const n = Number(t);
-    if (n >= 1 && !ids.includes(n)) ids.push(n);
+    const n = positiveIntParam(part.trim());
+    if (n !== null && !ids.includes(n)) ids.push(n);
   }
   return { ids, status: ids.length < 2 ? 'too_few' : ids.length > MAX_COMPARE ? 'too_many' : 'ok' };
 }

@@ -1,4 +1,4 @@
-import { lazy, Suspense, useId, useState, type FormEvent, type ReactNode } from 'react';
+import { useId, useState, type FormEvent, type ReactNode } from 'react';
 import { USDA_ZONES } from '@shared/hardiness';
 import { INFRASPECIFIC_RANKS } from '@shared/names/cultivar-name';
 import type { CultivarFull, CultivarInput } from '@shared/schemas/cultivars';
@@ -18,6 +18,7 @@ import type { UnitSystem } from '@shared/units';
 import { Button } from '@/components/button';
 import { CultivarName } from '@/components/cultivar-name';
 import { FormError } from '@/components/form-error';
+import { RichTextField } from '@/components/rich-text-field';
 import { TextField } from '@/components/text-field';
 import { errorMessage, isApiError } from '@/lib/api';
 import {
@@ -32,9 +33,6 @@ import {
 } from '@/lib/trait-words';
 import { EMPTY_NAME, nameInputOf, nameProblemsByField, namePreview, type NameFormValues } from '../lib/name-form';
 import { colourField, fieldSourceOf, heightForForm, traitsFromForm } from '../lib/trait-form';
-
-/** Tiptap loads with the form that needs it, not with every record page. */
-const RichTextEditor = lazy(() => import('@/components/rich-text-editor'));
 
 const inputClass = 'mt-1 block w-full rounded-md border bg-card px-3 py-2 text-base font-normal';
 
@@ -219,7 +217,7 @@ export interface RecordFormProps {
 
 /**
  * The whole record as a form: name parts (checked as they are typed with the shared writing rules,
- * with a live preview), meaning, pronunciation guide, notes as paragraphs, and the traits.
+ * with a live preview), meaning, pronunciation guide, notes (rich text), and the traits.
  */
 export function RecordForm({ initial, system, submitLabel, busy, error, onSubmit, onCancel }: RecordFormProps) {
   const id = useId();
@@ -331,24 +329,13 @@ export function RecordForm({ initial, system, submitLabel, busy, error, onSubmit
 
       <TraitFields initial={initial?.traits ?? null} system={system} errors={errors} />
 
-      <div className="space-y-1">
-        <p id={`${id}-notes`} className="font-bold">
-          Notes
-        </p>
-        <p id={`${id}-notes-hint`} className="text-sm text-ink-soft">
-          Care, where it grows well, how it differs from look-alikes. Bold, italic, lists and links are kept.
-        </p>
-        <FieldError id={`${id}-notes-e`} message={errors.notesHtml} />
-        <Suspense fallback={<div className="grid min-h-52 place-items-center rounded-md border border-edge bg-card text-ink-soft">Loading the editor…</div>}>
-          <RichTextEditor
-            initialHtml={initial?.notesHtml ?? ''}
-            onChange={setNotesHtml}
-            labelId={`${id}-notes`}
-            describedBy={[`${id}-notes-hint`, errors.notesHtml ? `${id}-notes-e` : null].filter(Boolean).join(' ')}
-            invalid={Boolean(errors.notesHtml)}
-          />
-        </Suspense>
-      </div>
+      <RichTextField
+        label="Notes"
+        hint="Care, where it grows well, how it differs from look-alikes. Bold, italic, lists and links are kept."
+        error={errors.notesHtml}
+        initialHtml={initial?.notesHtml ?? ''}
+        onChange={setNotesHtml}
+      />
 
       <label className="flex items-start gap-2">
         <input type="checkbox" name="fictional" defaultChecked={initial?.fictional ?? false} className="mt-1.5 size-4 accent-moss" />

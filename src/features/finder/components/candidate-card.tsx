@@ -88,7 +88,7 @@ export function CandidateCard({ candidate: c, rank, answers, system, zone }: Can
         <div className="h-2.5 flex-1 overflow-hidden rounded-full bg-bark-wash" aria-hidden="true">
           <div className="h-full rounded-full bg-moss" style={{ width: `${pct}%` }} />
         </div>
-        <span className="shrink-0 font-ui text-sm font-bold text-moss-deep tabular-nums">fits your answers: {pct}%</span>
+        <span className="shrink-0 font-ui text-sm font-bold text-moss-deep tabular-nums">Fits your answers: {pct}%</span>
       </div>
 
       {chips.length > 0 && (

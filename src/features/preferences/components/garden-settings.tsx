@@ -6,7 +6,7 @@ import { Button } from '@/components/button';
 import { FormError } from '@/components/form-error';
 import { errorMessage } from '@/lib/api';
 import { useReaderPrefs } from '../hooks/use-reader-prefs';
-import { zoneBandText, zoneFromTypedTemperature } from '../lib/reader-prefs';
+import { UNIT_SYSTEM_LABELS, zoneBandText, zoneFromTypedTemperature } from '../lib/reader-prefs';
 
 /** Props of GardenSettings: which parts to show where. */
 export interface GardenSettingsProps {
@@ -19,8 +19,8 @@ export interface GardenSettingsProps {
 }
 
 const unitChoices: { value: UnitSystem; label: string }[] = [
-  { value: 'metric', label: 'Metres and centimetres' },
-  { value: 'imperial', label: 'Feet and inches' },
+  { value: 'metric', label: UNIT_SYSTEM_LABELS.metric },
+  { value: 'imperial', label: UNIT_SYSTEM_LABELS.imperial },
 ];
 
 /** The temperature box that works a zone out for readers who do not know theirs. */

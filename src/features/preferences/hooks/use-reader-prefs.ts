@@ -5,7 +5,7 @@ import type { UsdaZone } from '@shared/hardiness';
 import type { UnitSystem } from '@shared/units';
 import { meQueryOptions, useMe } from '@/lib/auth';
 import { saveAccountPrefs, type AccountPrefsInput } from '../api/preferences-api';
-import { parseStoredPrefs, READER_PREFS_STORAGE_KEY, serializePrefs, type ReaderPrefs } from '../lib/reader-prefs';
+import { accountPrefsFromStored, parseStoredPrefs, READER_PREFS_STORAGE_KEY, serializePrefs, type ReaderPrefs } from '../lib/reader-prefs';
 
 const listeners = new Set<() => void>();
 
@@ -40,15 +40,15 @@ function writeLocal(patch: Partial<ReaderPrefs>): void {
   for (const l of listeners) l();
 }
 
-/**
- * The units and zone chosen on this browser, as a new account takes them (sign-up), so choices
- * made as a visitor are not lost on joining. Nothing when none were chosen.
- */
-export function browserAccountPrefs(): { unitSystem?: UnitSystem; hardinessZone?: UsdaZone } {
-  const raw = readRaw();
-  if (!raw) return {};
-  const stored = parseStoredPrefs(raw);
-  return { unitSystem: stored.unitSystem, ...(stored.zone ? { hardinessZone: stored.zone } : {}) };
+/** The choices stored on this browser, as stored (null when none), kept current across tabs. */
+function useStoredPrefs(): string | null {
+  return useSyncExternalStore(subscribe, readRaw, () => null);
+}
+
+/** The units and zone chosen on this browser, as a new account takes them (see `accountPrefsFromStored`). */
+export function useBrowserAccountPrefs(): { unitSystem?: UnitSystem; hardinessZone?: UsdaZone } {
+  const raw = useStoredPrefs();
+  return useMemo(() => accountPrefsFromStored(raw), [raw]);
 }
 
 /** What `useReaderPrefs` gives a screen. */
@@ -74,7 +74,7 @@ export interface ReaderPrefsState {
 export function useReaderPrefs(): ReaderPrefsState {
   const me = useMe();
   const queryClient = useQueryClient();
-  const raw = useSyncExternalStore(subscribe, readRaw, () => null);
+  const raw = useStoredPrefs();
   const local = useMemo(() => parseStoredPrefs(raw), [raw]);
   const user = me.data ?? null;
 

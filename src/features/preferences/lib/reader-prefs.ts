@@ -37,6 +37,19 @@ export function parseStoredPrefs(raw: string | null | undefined): ReaderPrefs {
   };
 }
 
+/** What each unit system is called wherever a reader chooses it (garden settings, account, sign-up). */
+export const UNIT_SYSTEM_LABELS: Record<UnitSystem, string> = { metric: 'Metres and centimetres', imperial: 'Feet and inches' };
+
+/**
+ * The units and zone stored on this browser, as a new account takes them (sign-up), so choices
+ * made as a visitor are not lost on joining. Nothing when none were stored.
+ */
+export function accountPrefsFromStored(raw: string | null): { unitSystem?: UnitSystem; hardinessZone?: UsdaZone } {
+  if (!raw) return {};
+  const stored = parseStoredPrefs(raw);
+  return { unitSystem: stored.unitSystem, ...(stored.zone ? { hardinessZone: stored.zone } : {}) };
+}
+
 /** The stored form of the choices (only the known fields). */
 export function serializePrefs(prefs: ReaderPrefs): string {
   return JSON.stringify({ unitSystem: prefs.unitSystem, zone: prefs.zone, container: prefs.container });

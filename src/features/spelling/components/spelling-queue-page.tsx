@@ -11,7 +11,7 @@ import { Page } from '@/components/page';
 import { Pager } from '@/components/pager';
 import { Loading, Spinner } from '@/components/spinner';
 import { errorMessage } from '@/lib/api';
-import { positiveIntParam } from '@/lib/route-params';
+import { pageFromParams, positiveIntParam } from '@/lib/route-params';
 import { clockText, tourMomentHref } from '@/lib/tour-moment';
 import { useAcceptFix, useDeclineFix, useFix, useFixes, useOpenFixPreview, useRunDetection, useUndoFix } from '../api/spelling-api';
 import { buildPreview } from '../lib/change-preview';
@@ -382,7 +382,7 @@ function FixDetailPanel({ id, onResult }: { id: number; onResult: (message: stri
 export function SpellingQueuePage() {
   const [params, setParams] = useSearchParams();
   const status = statusOf(params.get('status'));
-  const page = positiveIntParam(params.get('page')) ?? 1;
+  const page = pageFromParams(params);
   const selected = positiveIntParam(params.get('fix'));
   const fixes = useFixes(status, page);
   const [result, setResult] = useState<string | null>(null);

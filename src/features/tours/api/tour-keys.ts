@@ -17,6 +17,8 @@ export const tourKeys = {
   lists: () => [...tourKeys.all, 'list'] as const,
   publicList: (params: TourListParams) => [...tourKeys.lists(), 'public', params] as const,
   mine: () => [...tourKeys.lists(), 'mine'] as const,
+  /** Everyone with a published tour (the browse filter's author choices): a list, so publishing refreshes it. */
+  authorList: () => [...tourKeys.lists(), 'authors'] as const,
   mineList: (params: TourListParams) => [...tourKeys.mine(), params] as const,
   details: () => [...tourKeys.all, 'detail'] as const,
   detail: (id: number) => [...tourKeys.details(), id] as const,
@@ -28,7 +30,5 @@ export const tourKeys = {
   /** The cultivar record a browse filter names (for its printed name). */
   browseRecord: (slug: string) => [...tourKeys.all, 'browse-record', slug] as const,
   authors: () => [...tourKeys.all, 'author'] as const,
-  /** Everyone with a published tour (the browse filter's author choices). */
-  authorList: () => [...tourKeys.authors(), 'list'] as const,
   author: (id: number, page: number) => [...tourKeys.authors(), id, page] as const,
 };

@@ -37,7 +37,6 @@ export function trackCuesQueryOptions(trackId: number, version: number) {
 /** Tours per page on an author's page. */
 export const AUTHOR_TOURS_PAGE_SIZE = 12;
 
-/** Query options for an author's page. */
 /** Everyone with a published tour, by name. */
 export function authorListQueryOptions() {
   return queryOptions({
@@ -47,6 +46,7 @@ export function authorListQueryOptions() {
   });
 }
 
+/** Query options for an author's page. */
 export function authorPageQueryOptions(id: number, page: number) {
   return queryOptions({ queryKey: tourKeys.author(id, page), queryFn: ({ signal }) => fetchAuthorPage(id, page, AUTHOR_TOURS_PAGE_SIZE, signal) });
 }

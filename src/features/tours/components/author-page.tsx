@@ -9,7 +9,7 @@ import { isApiError } from '@/lib/api';
 import { useHeadMeta } from '@/lib/head-meta';
 import { AUTHOR_TOURS_PAGE_SIZE, useAuthorPage } from '../api/watch-api';
 import { formatDay } from '../lib/media-format';
-import { pageFromParams } from '../lib/page-param';
+import { pageFromParams } from '@/lib/route-params';
 import { TourCard } from './tour-card';
 
 /** /authors/:id: a member who publishes tours — name, garden, since when, and their published tours. */

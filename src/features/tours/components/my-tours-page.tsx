@@ -11,7 +11,7 @@ import { errorMessage } from '@/lib/api';
 import { clockText } from '@/lib/tour-moment';
 import { isBusy, useMyTours, useRetranscode } from '../api/tours-api';
 import { formatDay, timeLeftText } from '../lib/media-format';
-import { pageFromParams } from '../lib/page-param';
+import { pageFromParams } from '@/lib/route-params';
 import { ProgressBar } from './progress-bar';
 import { TourPoster } from './tour-poster';
 import { TourStateBadge } from './tour-state-badge';

@@ -1,4 +1,4 @@
-import { lazy, Suspense, useId, useState, type FormEvent } from 'react';
+import { useState, type FormEvent } from 'react';
 import { Link, useLocation, useNavigate } from 'react-router';
 import { updateTourInput, type TourDto } from '@shared/schemas/tours';
 import { Button, buttonClasses } from '@/components/button';
@@ -6,6 +6,7 @@ import { Card } from '@/components/card';
 import { ConfirmDialog } from '@/components/confirm-dialog';
 import { FormError, FormSuccess } from '@/components/form-error';
 import { Page, useDocumentTitle } from '@/components/page';
+import { RichTextField } from '@/components/rich-text-field';
 import { TextField } from '@/components/text-field';
 import { errorMessage, isApiError } from '@/lib/api';
 import { checkForm, focusFirstError, formValues, type FieldErrors } from '@/lib/form';
@@ -20,16 +21,12 @@ import { TranscodePanel } from './transcode-panel';
 import { UploadStatus } from './upload-status';
 import { VideoPicker } from './video-picker';
 
-const RichTextEditor = lazy(() => import('@/components/rich-text-editor'));
 
 function DetailsForm({ tour }: { tour: TourDto }) {
   const update = useUpdateTour(tour.id);
   const [description, setDescription] = useState(tour.descriptionHtml);
   const [errors, setErrors] = useState<FieldErrors>({});
   const [note, setNote] = useState<string | null>(null);
-  const descriptionLabel = useId();
-  const descriptionHint = useId();
-  const descriptionError = useId();
 
   const onSubmit = (event: FormEvent<HTMLFormElement>) => {
     event.preventDefault();
@@ -72,29 +69,13 @@ function DetailsForm({ tour }: { tour: TourDto }) {
         error={errors.garden}
       />
       <TextField label="Date filmed" name="filmedOn" type="date" defaultValue={tour.filmedOn ?? ''} error={errors.filmedOn} className="max-w-xs" />
-      <div className="space-y-1">
-        <p id={descriptionLabel} className="font-bold">
-          Description
-        </p>
-        <p id={descriptionHint} className="text-sm text-ink-soft">
-          What the walk shows, the season, anything viewers should look out for. Bold, italic, lists and links are kept.
-        </p>
-        {errors.descriptionHtml && (
-          <p id={descriptionError} className="text-sm font-bold text-maple">
-            <span className="sr-only">Error: </span>
-            {errors.descriptionHtml}
-          </p>
-        )}
-        <Suspense fallback={<div className="grid min-h-52 place-items-center rounded-md border border-edge bg-card text-ink-soft">Loading the editor…</div>}>
-          <RichTextEditor
-            initialHtml={tour.descriptionHtml}
-            onChange={setDescription}
-            labelId={descriptionLabel}
-            describedBy={[descriptionHint, errors.descriptionHtml ? descriptionError : null].filter(Boolean).join(' ')}
-            invalid={Boolean(errors.descriptionHtml)}
-          />
-        </Suspense>
-      </div>
+      <RichTextField
+        label="Description"
+        hint="What the walk shows, the season, anything viewers should look out for. Bold, italic, lists and links are kept."
+        error={errors.descriptionHtml}
+        initialHtml={tour.descriptionHtml}
+        onChange={setDescription}
+      />
       <FormError message={update.isError ? errorMessage(update.error) : null} />
       {note && (
         <p role="status" className="font-bold text-moss">

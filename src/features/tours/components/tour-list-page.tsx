@@ -18,7 +18,7 @@ import { tourKeys } from '../api/tour-keys';
 import { usePublicTours } from '../api/tours-api';
 import { authorListQueryOptions, authorPageQueryOptions } from '../api/watch-api';
 import { BROWSE_GROUPS, filtersFromParams, hasFilters, listParams, paramsFromFilters, type BrowseFilters } from '../lib/browse-filters';
-import { pageFromParams } from '../lib/page-param';
+import { pageFromParams } from '@/lib/route-params';
 import { TourCard } from './tour-card';
 
 /** Tours per page of the public list (four rows of three on a wide screen). */
@@ -42,13 +42,14 @@ function useFilterRecord(slug: string | undefined) {
  */
 function useAuthorChoices(current: number | undefined) {
   const list = useQuery(authorListQueryOptions());
-  const currentAuthor = useQuery({ ...authorPageQueryOptions(current ?? 0, 1), enabled: current != null });
+  const listed = !list.data || current == null || list.data.some((a) => a.id === current);
+  const currentAuthor = useQuery({ ...authorPageQueryOptions(current ?? 0, 1), enabled: !listed });
   return useMemo(() => {
-    const byId = new Map<number, string>();
-    for (const a of list.data ?? []) byId.set(a.id, a.displayName);
-    if (current != null && currentAuthor.data && !byId.has(current)) byId.set(current, currentAuthor.data.author.displayName);
-    return [...byId.entries()].map(([id, name]) => ({ id, name })).sort((a, b) => a.name.localeCompare(b.name));
-  }, [list.data, currentAuthor.data, current]);
+    // The server sends them by name; counts tell a namesake apart.
+    const choices = (list.data ?? []).map((a) => ({ id: a.id, name: `${a.displayName} (${a.publishedTours} ${a.publishedTours === 1 ? 'tour' : 'tours'})` }));
+    if (!listed && currentAuthor.data) choices.push({ id: currentAuthor.data.author.id, name: currentAuthor.data.author.displayName });
+    return choices;
+  }, [list.data, listed, currentAuthor.data]);
 }
 
 function FilterForm({ filters, onApply }: { filters: BrowseFilters; onApply: (f: BrowseFilters) => void }) {
@@ -133,7 +134,7 @@ function FilterForm({ filters, onApply }: { filters: BrowseFilters; onApply: (f:
         {chosen || picking ? (
           <CultivarPicker
             label="Shows this cultivar"
-            hint="Tours with a stop at this tree. Type part of the name; misspellings are fine."
+            hint="Tours with a stop at this tree. Type part of a name; common misspellings are found too."
             value={chosen}
             onChange={(c) => {
               setPicked(c);

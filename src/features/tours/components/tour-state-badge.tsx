@@ -5,7 +5,7 @@ const labels: Record<TourState, string> = {
   draft: 'Draft',
   processing: 'Preparing video',
   ready: 'Ready, not published',
-  failed: 'Video not prepared',
+  failed: 'Video could not be prepared',
   published: 'Published',
 };
 const tones: Record<TourState, BadgeTone> = { draft: 'plain', processing: 'ochre', ready: 'bark', failed: 'maple', published: 'moss' };
